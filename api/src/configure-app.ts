@@ -1,0 +1,87 @@
+import fastifyCookie from '@fastify/cookie';
+import fastifyHelmet from '@fastify/helmet';
+import { NestFactory } from '@nestjs/core';
+import { FastifyAdapter, NestFastifyApplication } from '@nestjs/platform-fastify';
+import { DocumentBuilder, OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
+import { AppModule } from './app.module';
+import { ProblemDetailsFilter } from './common/problem-details/problem-details.filter';
+import { createValidationPipe } from './common/problem-details/validation.pipe';
+import { generateRequestId, REQUEST_ID_HEADER } from './common/request-context/request-id';
+import { JsonLogger } from './common/logging/json-logger';
+import { registerConsoleHost } from './console-host/console-host';
+import { API_VERSION } from './version';
+
+export interface CreateAppOptions {
+  /** `silent` in tests; the HTTP layer and Nest both log JSON lines otherwise. */
+  logLevel?: 'fatal' | 'error' | 'warn' | 'info' | 'debug' | 'silent';
+  bodyLimitBytes?: number;
+  consoleDist?: string;
+  /** Build the module graph without connecting to anything (used to write the OpenAPI document). */
+  preview?: boolean;
+}
+
+/**
+ * Creates the application exactly as production runs it; e2e tests and the OpenAPI writer call this too,
+ * so what they check is what ships.
+ */
+export async function createApp(options: CreateAppOptions = {}): Promise<NestFastifyApplication> {
+  const logLevel = options.logLevel ?? 'info';
+  const adapter = new FastifyAdapter({
+    logger: logLevel === 'silent' ? false : { level: logLevel },
+    genReqId: generateRequestId,
+    bodyLimit: options.bodyLimitBytes ?? 64 * 1024 * 1024,
+    trustProxy: false,
+  });
+  const app = await NestFactory.create<NestFastifyApplication>(AppModule, adapter, {
+    logger: new JsonLogger(logLevel),
+    preview: options.preview ?? false,
+    abortOnError: false,
+  });
+  const fastify = app.getHttpAdapter().getInstance();
+
+  fastify.addHook('onRequest', async (request, reply) => {
+    reply.header(REQUEST_ID_HEADER, request.id);
+  });
+
+  await app.register(fastifyHelmet, {
+    contentSecurityPolicy: {
+      directives: {
+        defaultSrc: ["'self'"],
+        scriptSrc: ["'self'"],
+        // Radix Themes and the code editor set inline style attributes.
+        styleSrc: ["'self'", "'unsafe-inline'"],
+        fontSrc: ["'self'", 'data:'],
+        imgSrc: ["'self'", 'data:'],
+        workerSrc: ["'self'", 'blob:'],
+        connectSrc: ["'self'"],
+        frameAncestors: ["'none'"],
+      },
+    },
+  });
+  await app.register(fastifyCookie);
+
+  const notFoundFallback = options.consoleDist ? await registerConsoleHost(app, options.consoleDist) : undefined;
+  app.useGlobalFilters(new ProblemDetailsFilter(notFoundFallback));
+  app.useGlobalPipes(createValidationPipe());
+  app.enableShutdownHooks();
+
+  SwaggerModule.setup('v1/docs', app, () => buildOpenApiDocument(app), {
+    ui: false,
+    raw: ['json'],
+    jsonDocumentUrl: 'v1/openapi.json',
+  });
+  return app;
+}
+
+export function buildOpenApiDocument(app: NestFastifyApplication): OpenAPIObject {
+  const config = new DocumentBuilder()
+    .setTitle('Leastline API')
+    .setDescription(
+      'Exact least-squares regression with full inference, served over HTTP. Every failure is RFC 9457 ' +
+        'problem details (`application/problem+json`). Results are statistical estimates under the stated ' +
+        'model assumptions, not financial advice.',
+    )
+    .setVersion(API_VERSION)
+    .build();
+  return SwaggerModule.createDocument(app, config, { operationIdFactory: (_controller, method) => method });
+}
