@@ -27,7 +27,7 @@ async function main() {
     LEASTLINE_SMTP_URL: `smtp://127.0.0.1:${SMTP_PORT}`,
     LEASTLINE_CONSOLE_DIST: join(ROOT, 'console', 'dist'),
   };
-  migrate(env, { seed: true });
+  const demo = migrate(env, { seed: true });
 
   const children = [];
   const spawnChild = (name, args) => {
@@ -69,6 +69,12 @@ async function main() {
   say(`  OpenAPI         http://127.0.0.1:${API_PORT}/v1/openapi.json`);
   say(`  local inbox     http://127.0.0.1:${INBOX_PORT}/`);
   say(`  PostgreSQL      127.0.0.1:${cluster.port} (database "leastline")`);
+  if (demo?.signIn) {
+    say(`demo team (invented): ${demo.team}`);
+    say(`  sign in as      ${demo.signIn.email} / ${demo.signIn.password}`);
+    for (const user of demo.users ?? []) say(`  ${user.role.padEnd(14)} ${user.email}`);
+  }
+  if (demo?.apiKey) say(`  demo API key    ${demo.apiKey}`);
   say('press Ctrl-C to stop');
 }
 

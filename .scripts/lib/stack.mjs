@@ -2,7 +2,7 @@
 import { join } from 'node:path';
 import { ensureNodePackages, ensurePostgres } from './dependencies.mjs';
 import { ensureCluster } from './postgres.mjs';
-import { npmCommand, ROOT, run, say } from './repo.mjs';
+import { capture, npmCommand, ROOT, run, say } from './repo.mjs';
 
 export function prepareStack() {
   ensureNodePackages();
@@ -20,9 +20,15 @@ export function buildConsole() {
   run(npmCommand(), ['run', '--silent', 'build', '-w', 'console']);
 }
 
-/** Applies every pending migration, then (optionally) the invented demo scenario. */
+/**
+ * Applies every pending migration, then (optionally) the invented demo scenario; returns the seed's summary
+ * (demo sign-in and key) when it seeded.
+ */
 export function migrate(env, { seed }) {
   const cli = join(ROOT, 'api', 'dist', 'database', 'migrate-cli.js');
   run(process.execPath, [cli, 'up'], { env, stdio: ['ignore', 'ignore', 'inherit'] });
-  if (seed) run(process.execPath, [cli, 'seed'], { env, stdio: ['ignore', 'inherit', 'inherit'] });
+  if (!seed) return undefined;
+  const output = capture(process.execPath, [cli, 'seed'], { env, stdio: ['ignore', 'pipe', 'inherit'] });
+  if (output === undefined) throw new Error('seeding the demo scenario failed');
+  return JSON.parse(output.split('\n').filter(Boolean).pop() ?? '{}');
 }

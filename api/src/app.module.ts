@@ -4,6 +4,12 @@ import { CONFIG_NAMESPACES } from './config/configuration';
 import { validateEnvironment } from './config/env.validation';
 import { DatabaseModule } from './database/database.module';
 import { HealthModule } from './health/health.module';
+import { ApiKeysModule } from './api-keys/api-keys.module';
+import { AuditEventsModule } from './audit/audit-events.module';
+import { AuditModule } from './audit/audit.module';
+import { AuthModule } from './auth/auth.module';
+import { MailModule } from './mail/mail.module';
+import { TeamsModule } from './teams/teams.module';
 
 @Module({
   imports: [
@@ -15,6 +21,12 @@ import { HealthModule } from './health/health.module';
     }),
     DatabaseModule,
     HealthModule,
+    AuditModule,
+    MailModule,
+    AuthModule,
+    TeamsModule,
+    ApiKeysModule,
+    AuditEventsModule,
   ],
 })
 export class AppModule {}

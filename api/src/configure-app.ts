@@ -1,9 +1,16 @@
 import fastifyCookie from '@fastify/cookie';
+import fastifyCsrfProtection from '@fastify/csrf-protection';
 import fastifyHelmet from '@fastify/helmet';
 import { NestFactory } from '@nestjs/core';
 import { FastifyAdapter, NestFastifyApplication } from '@nestjs/platform-fastify';
 import { DocumentBuilder, OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
 import { AppModule } from './app.module';
+import { API_KEY_BEARER_SECURITY, API_KEY_HEADER_SECURITY } from './api-keys/api-key.decorators';
+import { API_KEY_HEADER } from './api-keys/api-key.strategies';
+import { CSRF_COOKIE, CSRF_HEADER, csrfCookieOptions, SESSION_COOKIE } from './auth/auth-cookies';
+import { CSRF_SECURITY, SESSION_SECURITY } from './auth/auth.decorators';
+import { omitConsoleCsrfOnReads } from './auth/openapi-security';
+import { securityConfig } from './config/configuration';
 import { ProblemDetailsFilter } from './common/problem-details/problem-details.filter';
 import { createValidationPipe } from './common/problem-details/validation.pipe';
 import { generateRequestId, REQUEST_ID_HEADER } from './common/request-context/request-id';
@@ -59,6 +66,16 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestFas
     },
   });
   await app.register(fastifyCookie);
+  // The CSRF secret sits in its own httpOnly cookie; CsrfService checks the token on console routes only,
+  // so the public API (API keys, no cookies) is unaffected.
+  await app.register(fastifyCsrfProtection, {
+    cookieKey: CSRF_COOKIE,
+    cookieOpts: csrfCookieOptions(securityConfig().secureCookies),
+    getToken: (request) => {
+      const value = request.headers[CSRF_HEADER];
+      return Array.isArray(value) ? value[0] : value;
+    },
+  });
 
   const notFoundFallback = options.consoleDist ? await registerConsoleHost(app, options.consoleDist) : undefined;
   app.useGlobalFilters(new ProblemDetailsFilter(notFoundFallback));
@@ -82,6 +99,23 @@ export function buildOpenApiDocument(app: NestFastifyApplication): OpenAPIObject
         'model assumptions, not financial advice.',
     )
     .setVersion(API_VERSION)
+    .addBearerAuth(
+      { type: 'http', scheme: 'bearer', description: 'A Leastline API key (llsq1_…) as a bearer token.' },
+      API_KEY_BEARER_SECURITY,
+    )
+    .addApiKey({ type: 'apiKey', in: 'header', name: API_KEY_HEADER, description: 'A Leastline API key (llsq1_…).' }, API_KEY_HEADER_SECURITY)
+    .addCookieAuth(SESSION_COOKIE, { type: 'apiKey', in: 'cookie', name: SESSION_COOKIE, description: 'Console session.' }, SESSION_SECURITY)
+    .addApiKey(
+      {
+        type: 'apiKey',
+        in: 'header',
+        name: 'X-Leastline-Csrf',
+        description: 'CSRF token from GET /v1/session/csrf-token; required on POST, PUT, PATCH and DELETE of console routes.',
+      },
+      CSRF_SECURITY,
+    )
     .build();
-  return SwaggerModule.createDocument(app, config, { operationIdFactory: (_controller, method) => method });
+  return omitConsoleCsrfOnReads(
+    SwaggerModule.createDocument(app, config, { operationIdFactory: (_controller, method) => method }),
+  );
 }

@@ -23,12 +23,24 @@ export const databaseConfig = registerAs('database', () => ({ url: env().LEASTLI
 
 export const securityConfig = registerAs('security', () => {
   const values = env();
-  return { sessionSecret: values.LEASTLINE_SESSION_SECRET, keyPepper: values.LEASTLINE_KEY_PEPPER };
+  return {
+    sessionSecret: values.LEASTLINE_SESSION_SECRET,
+    keyPepper: values.LEASTLINE_KEY_PEPPER,
+    passwordHashCost: values.LEASTLINE_PASSWORD_HASH_COST,
+    apiKeyCacheTtlMs: values.LEASTLINE_API_KEY_CACHE_TTL_MS,
+    /** Cookies get the Secure flag whenever the public origin is HTTPS. */
+    secureCookies: values.LEASTLINE_PUBLIC_URL.startsWith('https:'),
+  };
 });
 
 export const mailConfig = registerAs('mail', () => {
   const values = env();
-  return { smtpUrl: values.LEASTLINE_SMTP_URL, from: values.LEASTLINE_MAIL_FROM };
+  return {
+    smtpUrl: values.LEASTLINE_SMTP_URL,
+    from: values.LEASTLINE_MAIL_FROM,
+    pollIntervalMs: values.LEASTLINE_MAIL_POLL_MS,
+    retryBaseMs: values.LEASTLINE_MAIL_RETRY_BASE_MS,
+  };
 });
 
 export type AppConfig = ReturnType<typeof appConfig>;

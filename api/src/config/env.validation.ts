@@ -14,6 +14,10 @@ export interface LeastlineEnvironment {
   LEASTLINE_CONSOLE_DIST: string;
   LEASTLINE_LOG_LEVEL: 'fatal' | 'error' | 'warn' | 'info' | 'debug' | 'silent';
   LEASTLINE_BODY_LIMIT_BYTES: number;
+  LEASTLINE_PASSWORD_HASH_COST: number;
+  LEASTLINE_API_KEY_CACHE_TTL_MS: number;
+  LEASTLINE_MAIL_POLL_MS: number;
+  LEASTLINE_MAIL_RETRY_BASE_MS: number;
 }
 
 export class EnvironmentError extends Error {
@@ -87,6 +91,20 @@ export function validateEnvironment(env: Record<string, unknown>): LeastlineEnvi
       min: 1024,
       max: 2 ** 31 - 1,
       fallback: 64 * 1024 * 1024,
+    }),
+    // bcrypt work factor: 12 costs about 0.3 s per hash here; below 10 is too cheap for stored passwords.
+    LEASTLINE_PASSWORD_HASH_COST: readInteger(env, 'LEASTLINE_PASSWORD_HASH_COST', problems, { min: 10, max: 15, fallback: 12 }),
+    // How long an API process may keep answering from its key cache after a change made elsewhere.
+    LEASTLINE_API_KEY_CACHE_TTL_MS: readInteger(env, 'LEASTLINE_API_KEY_CACHE_TTL_MS', problems, {
+      min: 0,
+      max: 300_000,
+      fallback: 30_000,
+    }),
+    LEASTLINE_MAIL_POLL_MS: readInteger(env, 'LEASTLINE_MAIL_POLL_MS', problems, { min: 50, max: 600_000, fallback: 5_000 }),
+    LEASTLINE_MAIL_RETRY_BASE_MS: readInteger(env, 'LEASTLINE_MAIL_RETRY_BASE_MS', problems, {
+      min: 10,
+      max: 3_600_000,
+      fallback: 5_000,
     }),
   };
   // A short session secret makes the signed cookie guessable; 32 bytes is what the session plugin requires.

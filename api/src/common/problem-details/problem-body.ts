@@ -1,5 +1,6 @@
 import { HttpException } from '@nestjs/common';
 import { FieldProblem, ProblemException } from './problem.exception';
+import { ReplayedProblemException } from './replayed-problem.exception';
 import { PROBLEM_TYPES, ProblemType, problemTypeForStatus, problemTypeUri } from './problem-types';
 
 export const PROBLEM_CONTENT_TYPE = 'application/problem+json';
@@ -66,6 +67,9 @@ function httpExceptionDetail(exception: HttpException): string {
 /** Maps any thrown value to one RFC 9457 body. The single place that decides what a client sees. */
 export function buildProblem(exception: unknown, requestId: string): ProblemResponse {
   const base = { instance: `urn:uuid:${requestId}`, requestId };
+  if (exception instanceof ReplayedProblemException) {
+    return { body: exception.storedBody, headers: { 'idempotency-replayed': 'true' }, unexpected: false };
+  }
   if (exception instanceof ProblemException) {
     const body: ProblemBody = {
       ...exception.extensions,

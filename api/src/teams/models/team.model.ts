@@ -16,4 +16,9 @@ export class Team extends Model {
 
   @Column({ type: DataType.BOOLEAN, allowNull: false, field: 'is_demo' })
   declare isDemo: boolean;
+
+  @Column({ type: DataType.BOOLEAN, allowNull: false, field: 'developer_keys_allowed', defaultValue: false })
+  declare developerKeysAllowed: boolean;
+
+  declare createdAt: Date;
 }
