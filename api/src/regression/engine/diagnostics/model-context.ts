@@ -1,0 +1,70 @@
+/**
+ * A fitted least-squares model as the diagnostics see it, and its whitened form.
+ *
+ * Weighted least squares with weights w is ordinary least squares on the whitened model
+ * sqrt(w) y = sqrt(w) X b + u. Every residual-based check is therefore applied to the whitened
+ * residuals sqrt(w_i) e_i and the whitened regressors sqrt(w_i) x_i; without weights these are the
+ * model's own residuals and columns.
+ */
+
+import { DesignMatrix, LeastSquaresSolution } from '../least-squares';
+
+export interface FittedModel {
+  design: DesignMatrix;
+  /** The response on the model's scale (after any log transform). */
+  response: Float64Array;
+  solution: LeastSquaresSolution;
+  /** Positive weights of a weighted fit, row-aligned with the design. */
+  weights?: Float64Array;
+}
+
+export interface RegressorSet {
+  /** True when an explicit constant is part of the set (it is not listed in `names`/`columns`). */
+  constant: boolean;
+  names: string[];
+  columns: Float64Array[];
+}
+
+export function whitenedResiduals(model: FittedModel): Float64Array {
+  const { residuals } = model.solution;
+  const { weights } = model;
+  if (!weights) return residuals;
+  const result = new Float64Array(residuals.length);
+  for (let i = 0; i < residuals.length; i++) result[i] = Math.sqrt(weights[i]!) * residuals[i]!;
+  return result;
+}
+
+/** The design's columns multiplied row-wise by sqrt(w); the columns themselves when unweighted. */
+export function whitenedColumns(model: FittedModel): Float64Array[] {
+  const { weights } = model;
+  if (!weights) return model.design.columns;
+  const roots = weights.map(Math.sqrt);
+  return model.design.columns.map((column) => column.map((value, i) => value * roots[i]!));
+}
+
+/**
+ * The model's regressors for an auxiliary regression: an unweighted intercept model gives the
+ * constant plus its slope columns; otherwise every whitened column, with no separate constant (for a
+ * weighted intercept model the whitened intercept column sqrt(w) takes the constant's place).
+ */
+export function modelRegressors(model: FittedModel): RegressorSet {
+  const { design } = model;
+  if (design.hasIntercept && !model.weights) {
+    return { constant: true, names: design.names.slice(1), columns: design.columns.slice(1) };
+  }
+  const names = design.names.map((name, j) => (design.hasIntercept && j === 0 ? WHITENED_INTERCEPT_NAME : name));
+  return { constant: false, names, columns: whitenedColumns(model) };
+}
+
+/** Name of the whitened intercept column sqrt(w) in auxiliary regressions of a weighted fit. */
+export const WHITENED_INTERCEPT_NAME = 'sqrt(weight)';
+
+/**
+ * Non-constant regressors to which a test adds its own constant: the slope columns of an unweighted
+ * intercept model, every whitened column otherwise (a column equal to the constant is dropped later by
+ * the auxiliary regression's collinearity handling).
+ */
+export function nonConstantRegressors(model: FittedModel): { names: string[]; columns: Float64Array[] } {
+  const regressors = modelRegressors(model);
+  return { names: regressors.names, columns: regressors.columns };
+}
