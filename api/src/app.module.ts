@@ -10,6 +10,10 @@ import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { MailModule } from './mail/mail.module';
 import { TeamsModule } from './teams/teams.module';
+import { PublicApiModule } from './common/public-api/public-api.module';
+import { DatasetsModule } from './datasets/datasets.module';
+import { RegressionModule } from './regression/regression.module';
+import { UsageModule } from './usage/usage.module';
 
 @Module({
   imports: [
@@ -27,6 +31,10 @@ import { TeamsModule } from './teams/teams.module';
     TeamsModule,
     ApiKeysModule,
     AuditEventsModule,
+    PublicApiModule,
+    UsageModule,
+    DatasetsModule,
+    RegressionModule,
   ],
 })
 export class AppModule {}

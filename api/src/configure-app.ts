@@ -16,6 +16,7 @@ import { createValidationPipe } from './common/problem-details/validation.pipe';
 import { generateRequestId, REQUEST_ID_HEADER } from './common/request-context/request-id';
 import { JsonLogger } from './common/logging/json-logger';
 import { registerConsoleHost } from './console-host/console-host';
+import { registerBodyParsers } from './common/body-parsers/register-body-parsers';
 import { API_VERSION } from './version';
 
 export interface CreateAppOptions {
@@ -76,6 +77,8 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestFas
       return Array.isArray(value) ? value[0] : value;
     },
   });
+
+  await registerBodyParsers(app, options.bodyLimitBytes ?? 64 * 1024 * 1024);
 
   const notFoundFallback = options.consoleDist ? await registerConsoleHost(app, options.consoleDist) : undefined;
   app.useGlobalFilters(new ProblemDetailsFilter(notFoundFallback));

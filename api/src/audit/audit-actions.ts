@@ -13,5 +13,7 @@ export const AUDIT_ACTIONS = [
   'api-key.created',
   'api-key.rotated',
   'api-key.revoked',
+  'dataset.created',
+  'dataset.deleted',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];

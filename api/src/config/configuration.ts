@@ -16,6 +16,7 @@ export const appConfig = registerAs('app', () => {
     consoleDist: values.LEASTLINE_CONSOLE_DIST,
     logLevel: values.LEASTLINE_LOG_LEVEL,
     bodyLimitBytes: values.LEASTLINE_BODY_LIMIT_BYTES,
+    uploadLimitBytes: values.LEASTLINE_UPLOAD_LIMIT_BYTES,
   };
 });
 

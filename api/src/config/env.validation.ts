@@ -14,6 +14,7 @@ export interface LeastlineEnvironment {
   LEASTLINE_CONSOLE_DIST: string;
   LEASTLINE_LOG_LEVEL: 'fatal' | 'error' | 'warn' | 'info' | 'debug' | 'silent';
   LEASTLINE_BODY_LIMIT_BYTES: number;
+  LEASTLINE_UPLOAD_LIMIT_BYTES: number;
   LEASTLINE_PASSWORD_HASH_COST: number;
   LEASTLINE_API_KEY_CACHE_TTL_MS: number;
   LEASTLINE_MAIL_POLL_MS: number;
@@ -91,6 +92,11 @@ export function validateEnvironment(env: Record<string, unknown>): LeastlineEnvi
       min: 1024,
       max: 2 ** 31 - 1,
       fallback: 64 * 1024 * 1024,
+    }),
+    LEASTLINE_UPLOAD_LIMIT_BYTES: readInteger(env, 'LEASTLINE_UPLOAD_LIMIT_BYTES', problems, {
+      min: 1024,
+      max: Number.MAX_SAFE_INTEGER,
+      fallback: 2 * 1024 * 1024 * 1024,
     }),
     // bcrypt work factor: 12 costs about 0.3 s per hash here; below 10 is too cheap for stored passwords.
     LEASTLINE_PASSWORD_HASH_COST: readInteger(env, 'LEASTLINE_PASSWORD_HASH_COST', problems, { min: 10, max: 15, fallback: 12 }),

@@ -3,6 +3,7 @@ import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { randomUUID } from 'node:crypto';
 import { Op, WhereOptions } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
+import { decodeCursor, encodeCursor, invalidCursor } from '../common/pagination/cursor';
 import { ProblemException } from '../common/problem-details/problem.exception';
 import { PROBLEM_TYPES } from '../common/problem-details/problem-types';
 import { ColumnBuilder } from './ingest/column-builder';
@@ -29,19 +30,15 @@ export interface LoadedDataset {
 
 const MAX_ROWS_PER_PAGE = 1000;
 
-function encodeCursor(dataset: Dataset): string {
-  return Buffer.from(`${dataset.createdAt.toISOString()}|${dataset.id}`).toString('base64url');
+function datasetCursor(dataset: Dataset): string {
+  return encodeCursor({ createdAt: dataset.createdAt.toISOString(), id: dataset.id });
 }
 
-function decodeCursor(cursor: string): { createdAt: Date; id: string } {
-  const [createdAt, id] = Buffer.from(cursor, 'base64url').toString('utf8').split('|');
-  const date = new Date(createdAt ?? '');
-  if (!id || Number.isNaN(date.getTime()) || !/^[0-9a-f-]{36}$/.test(id)) {
-    throw new ProblemException(PROBLEM_TYPES.invalidRequest, 'The cursor is not one this API issued.', [
-      { pointer: '#/cursor', detail: 'unknown cursor' },
-    ]);
-  }
-  return { createdAt: date, id };
+function readDatasetCursor(cursor: string): { createdAt: Date; id: string } {
+  const position = decodeCursor(cursor, ['createdAt', 'id']);
+  const createdAt = new Date(position.createdAt as string);
+  if (Number.isNaN(createdAt.getTime()) || !/^[0-9a-f-]{36}$/.test(position.id as string)) throw invalidCursor();
+  return { createdAt, id: position.id as string };
 }
 
 /** Upload problems keep their own code so clients can branch on it. */
@@ -180,7 +177,7 @@ export class DatasetsService {
     const conditions: WhereOptions<Dataset>[] = [where];
     if (options.name) conditions.push({ name: options.name });
     if (options.cursor) {
-      const { createdAt, id } = decodeCursor(options.cursor);
+      const { createdAt, id } = readDatasetCursor(options.cursor);
       conditions.push({
         [Op.or]: [{ createdAt: { [Op.lt]: createdAt } }, { createdAt, id: { [Op.lt]: id } }],
       } as WhereOptions<Dataset>);
@@ -195,7 +192,7 @@ export class DatasetsService {
     });
     const items = rows.slice(0, options.limit);
     const last = items[items.length - 1];
-    return { items, nextCursor: rows.length > options.limit && last ? encodeCursor(last) : null };
+    return { items, nextCursor: rows.length > options.limit && last ? datasetCursor(last) : null };
   }
 
   async get(teamId: string, datasetId: string): Promise<Dataset> {

@@ -18,6 +18,7 @@ export async function up({ context: queryInterface }: MigrationParams<QueryInter
     input_hash: { type: DataTypes.STRING(64), allowNull: false },
     specification: { type: DataTypes.JSONB, allowNull: false },
     result: { type: DataTypes.JSONB, allowNull: false },
+    model_snapshot: { type: DataTypes.JSONB, allowNull: true },
     request_id: { type: DataTypes.STRING(128), allowNull: false },
     api_key_id: { type: DataTypes.STRING(64), allowNull: true },
     created_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },

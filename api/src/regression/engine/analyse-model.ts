@@ -33,7 +33,9 @@ import { coefficientInference, CoefficientInference } from './covariance-inferen
 import { AnalysisError } from './diagnostics/analysis-error';
 import { FittedModel } from './diagnostics/model-context';
 import { validateSignificanceLevel } from './diagnostics/test-outcome';
-import { predictAt, PredictionResult } from './prediction';
+import { predictAt, PredictionModel, PredictionResult } from './prediction';
+export { predictAt } from './prediction';
+export type { PredictionModel } from './prediction';
 import { responseTransformation } from './functional-forms';
 import { smearingFactor } from './smearing';
 
@@ -71,6 +73,20 @@ export interface PredictionInput extends FitInput {
 }
 
 export function analyseModel(input: AnalysisInput): AnalysisResult {
+  return analyseModelWithSnapshot(input).analysis;
+}
+
+export interface PredictionSnapshot {
+  model: PredictionModel;
+  covariance: CoefficientInference['covariance'];
+  confidenceLevel: number;
+}
+
+/**
+ * analyseModel plus the prediction snapshot of the same solve (one factorisation for both), for callers
+ * that store a fit and predict from it later.
+ */
+export function analyseModelWithSnapshot(input: AnalysisInput): { analysis: AnalysisResult; snapshot: PredictionSnapshot } {
   const significanceLevel = validateSignificanceLevel(input.significanceLevel);
   const names = validateDiagnosticNames(input.diagnostics);
   const diagnosticOptions = validateDiagnosticOptions(input.diagnosticOptions);
@@ -78,25 +94,39 @@ export function analyseModel(input: AnalysisInput): AnalysisResult {
   const covariance = coefficientCovariance(model, resolveCovariance(input, model));
   const inference = coefficientInference(model.design, model.solution.coefficients, covariance, validated.confidenceLevel);
   return {
-    ...inference,
-    observationCount: model.design.n,
-    residualDegreesOfFreedom: model.design.n - model.design.columns.length,
-    significanceLevel,
-    diagnostics: runDiagnostics(model, names, significanceLevel, diagnosticOptions),
+    analysis: {
+      ...inference,
+      observationCount: model.design.n,
+      residualDegreesOfFreedom: model.design.n - model.design.columns.length,
+      significanceLevel,
+      diagnostics: runDiagnostics(model, names, significanceLevel, diagnosticOptions),
+    },
+    snapshot: snapshotOf(validated, model, covariance),
   };
 }
 
-export function predict(input: PredictionInput): PredictionResult & { covariance: CoefficientInference['covariance'] } {
+/**
+ * Everything a later prediction needs from a fit (coefficients, their covariance under the chosen
+ * choice, sigma², degrees of freedom, smearing factor), as plain data that can be stored and used again.
+ */
+export function predictionModelFor(input: FitInput & { covariance?: CovarianceOption }): PredictionSnapshot {
   const { input: validated, model } = prepareModel(input);
-  const covariance = coefficientCovariance(model, resolveCovariance(input, model));
+  return snapshotOf(validated, model, coefficientCovariance(model, resolveCovariance(input, model)));
+}
+
+function snapshotOf(
+  validated: ReturnType<typeof prepareModel>['input'],
+  model: FittedModel,
+  covariance: ReturnType<typeof coefficientCovariance>,
+): PredictionSnapshot {
   const n = model.design.n;
   const p = model.design.columns.length;
   const smearing =
     responseTransformation(validated.form) === 'natural-log'
       ? smearingFactor(model.solution.residuals, model.weights ?? null)
       : null;
-  const result = predictAt(
-    {
+  return {
+    model: {
       predictorNames: validated.predictors.map((predictor) => predictor.name),
       hasIntercept: validated.intercept,
       coefficients: model.solution.coefficients,
@@ -106,10 +136,14 @@ export function predict(input: PredictionInput): PredictionResult & { covariance
       form: validated.form,
       smearingFactor: smearing,
     },
-    input.points,
-    validated.confidenceLevel,
-  );
-  return { ...result, covariance: covariance.description };
+    covariance: covariance.description,
+    confidenceLevel: validated.confidenceLevel,
+  };
+}
+
+export function predict(input: PredictionInput): PredictionResult & { covariance: CoefficientInference['covariance'] } {
+  const { model, covariance, confidenceLevel } = predictionModelFor(input);
+  return { ...predictAt(model, input.points, confidenceLevel), covariance };
 }
 
 function resolveCovariance(input: { columns: FitInput['columns']; covariance?: CovarianceOption }, model: FittedModel): CovarianceRequest {

@@ -24,6 +24,10 @@ export class StoredResult extends Model {
   @Column({ type: DataType.JSONB, allowNull: false })
   declare result: Record<string, unknown>;
 
+  /** What a later prediction needs (coefficients, covariance, sigma², df, smearing); fits only. */
+  @Column({ type: DataType.JSONB, allowNull: true, field: 'model_snapshot' })
+  declare modelSnapshot: Record<string, unknown> | null;
+
   @Column({ type: DataType.STRING(128), allowNull: false, field: 'request_id' })
   declare requestId: string;
 

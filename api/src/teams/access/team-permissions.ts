@@ -30,7 +30,7 @@ export const PERMISSION_MATRIX = {
   'datasets:read': { roles: ['owner', 'developer'], description: 'List and download datasets' },
   'datasets:write': { roles: ['owner', 'developer'], description: 'Upload and delete datasets' },
   'plan:manage': { roles: ['owner', 'billing'], description: 'Change the plan' },
-  'usage:read': { roles: ['owner', 'billing'], description: 'See metered usage' },
+  'usage:read': { roles: ['owner', 'admin', 'billing'], description: 'See metered usage and the request overview' },
   'invoices:read': { roles: ['owner', 'billing'], description: 'See and download invoices' },
   'payment-method:manage': { roles: ['owner', 'billing'], description: 'Set the payment method' },
 } as const satisfies Record<string, { roles: readonly TeamRole[]; description: string }>;

@@ -1,6 +1,6 @@
 import { DataType, tableFromIPC } from 'apache-arrow';
-import { ProblemException } from '../common/problem-details/problem.exception';
-import { PROBLEM_TYPES } from '../common/problem-details/problem-types';
+import { ProblemException } from '../problem-details/problem.exception';
+import { PROBLEM_TYPES } from '../problem-details/problem-types';
 
 /** Content type of the compact binary body: an Apache Arrow IPC stream. */
 export const ARROW_STREAM_CONTENT_TYPE = 'application/vnd.apache.arrow.stream';
