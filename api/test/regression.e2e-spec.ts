@@ -42,7 +42,7 @@ describe('public API: fits, comparisons, predictions, batch and rolling fits', (
       expect(logRelativeError(fit.rSquared, certified.r_squared)).toBeGreaterThanOrEqual(9);
       expect(response.body).toMatchObject({ kind: 'fit', engineVersion: expect.any(String), inputHash: expect.stringMatching(/^[0-9a-f]{64}$/) });
       expect(response.body.caution).toMatch(/not financial advice/i);
-      expect(response.body.diagnostics).toHaveProperty('jarque-bera');
+      expect(response.body.diagnostics).toHaveProperty('jarqueBera');
     });
 
     it('returns the same numbers for an Arrow IPC body as for JSON, with the same input hash', async () => {
@@ -82,7 +82,7 @@ describe('public API: fits, comparisons, predictions, batch and rolling fits', (
       }).expect(201);
       expect(JSON.stringify(response.body.inference.covariance)).toMatch(/hc3/);
       expect(response.body.inference.coefficients[1].standardError).not.toBe(response.body.fit.coefficients[1].standardError);
-      expect(Object.keys(response.body.diagnostics)).toEqual(['breusch-pagan']);
+      expect(Object.keys(response.body.diagnostics)).toEqual(['breuschPagan']);
     });
 
     it('drops rows listwise when asked and lists them (0-based)', async () => {

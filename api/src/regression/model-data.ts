@@ -1,5 +1,6 @@
 import { ProblemException } from '../common/problem-details/problem.exception';
 import { PROBLEM_TYPES } from '../common/problem-details/problem-types';
+import { parsePlainNumber } from '../datasets/ingest/column-builder';
 
 export type MissingValuePolicy = 'drop-rows' | 'reject';
 export const MISSING_VALUE_POLICIES: MissingValuePolicy[] = ['drop-rows', 'reject'];
@@ -25,6 +26,16 @@ export interface PreparedData {
 }
 
 const MAX_LISTED_ROWS = 20;
+
+/**
+ * A cell as a number: numbers as they are, and strings that are plain decimal numbers (a dataset column
+ * stored as text because of one odd cell keeps its other cells as text too). Anything else is NaN.
+ */
+function numericValue(value: number | string | null | undefined): number {
+  if (typeof value === 'number') return value;
+  if (typeof value === 'string') return parsePlainNumber(value.trim());
+  return Number.NaN;
+}
 
 function isMissing(value: number | string | null | undefined): boolean {
   return value === null || value === undefined || (typeof value === 'number' && Number.isNaN(value)) || value === '';
@@ -77,7 +88,7 @@ export function prepareModelData(
         keep[i] = 0;
         continue;
       }
-      if (requirement.kind === 'numeric' && (typeof value !== 'number' || !Number.isFinite(value))) {
+      if (requirement.kind === 'numeric' && !Number.isFinite(numericValue(value))) {
         const shown = typeof value === 'string' ? `"${value.slice(0, 40)}"` : String(value);
         throw new ProblemException(
           PROBLEM_TYPES.unprocessable,
@@ -110,7 +121,7 @@ export function prepareModelData(
         continue;
       }
       const values = new Float64Array(used);
-      for (let i = 0, j = 0; i < total; i++) if (keep[i]) values[j++] = column[i] as number;
+      for (let i = 0, j = 0; i < total; i++) if (keep[i]) values[j++] = numericValue(column[i]);
       numeric[requirement.name] = values;
     } else {
       const values: string[] = new Array<string>(used);

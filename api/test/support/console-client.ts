@@ -29,14 +29,15 @@ export class ConsoleClient {
   }
 
   /** Sends with cookies and (for POST/PUT/PATCH/DELETE) the CSRF header. */
-  async send(method: Method, path: string, body?: unknown): Promise<Response> {
+  async send(method: Method, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<Response> {
     if (method !== 'get' && !this.csrfToken) await this.fetchCsrfToken();
-    return this.raw(method, path, body, method === 'get' ? undefined : this.csrfToken);
+    return this.raw(method, path, body, method === 'get' ? undefined : this.csrfToken, headers);
   }
 
   /** Sends with cookies but lets the caller choose the CSRF header (or none). */
-  async raw(method: Method, path: string, body?: unknown, csrfToken?: string): Promise<Response> {
+  async raw(method: Method, path: string, body?: unknown, csrfToken?: string, headers: Record<string, string> = {}): Promise<Response> {
     let pending = request(this.app.getHttpServer())[method](path);
+    for (const [name, value] of Object.entries(headers)) pending = pending.set(name, value);
     if (this.cookies.size > 0) {
       pending = pending.set('Cookie', [...this.cookies].map(([name, value]) => `${name}=${value}`).join('; '));
     }

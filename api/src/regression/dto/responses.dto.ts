@@ -1,5 +1,5 @@
-import { ApiProperty, ApiPropertyOptional, OmitType } from '@nestjs/swagger';
-import { AnalysisResultDto } from './results/analysis-result.dto';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { InferenceResultDto } from './results/analysis-result.dto';
 import { BatchFitResultDto } from './results/batch-fit-result.dto';
 import { CovarianceDescriptionDto } from './results/coefficient-inference.dto';
 import { DiagnosticsDto } from './results/diagnostics.dto';
@@ -93,8 +93,6 @@ class BillableEnvelopeDto extends ResultEnvelopeDto {
   source: DataSourceDescriptionDto;
 }
 
-export class InferenceBlockDto extends OmitType(AnalysisResultDto, ['diagnostics'] as const) {}
-
 export class FitResponseDto extends BillableEnvelopeDto {
   @ApiProperty({ type: RowAccountingDto })
   rows: RowAccountingDto;
@@ -102,8 +100,8 @@ export class FitResponseDto extends BillableEnvelopeDto {
   @ApiProperty({ type: FitResultDto, description: 'The fit with classical inference, ANOVA and goodness of fit.' })
   fit: FitResultDto;
 
-  @ApiProperty({ type: InferenceBlockDto, description: 'Coefficients and the Wald test under the requested covariance.' })
-  inference: InferenceBlockDto;
+  @ApiProperty({ type: InferenceResultDto, description: 'Coefficients and the Wald test under the requested covariance.' })
+  inference: InferenceResultDto;
 
   @ApiProperty({ type: DiagnosticsDto, description: 'The requested assumption checks (empty with diagnostics = "none").' })
   diagnostics: DiagnosticsDto;
@@ -155,8 +153,8 @@ export class StoredResultResponseDto extends ResultEnvelopeDto {
   @ApiPropertyOptional({ type: FitResultDto })
   fit?: FitResultDto;
 
-  @ApiPropertyOptional({ type: InferenceBlockDto })
-  inference?: InferenceBlockDto;
+  @ApiPropertyOptional({ type: InferenceResultDto })
+  inference?: InferenceResultDto;
 
   @ApiPropertyOptional({ type: DiagnosticsDto })
   diagnostics?: DiagnosticsDto;

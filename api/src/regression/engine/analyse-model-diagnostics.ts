@@ -60,7 +60,15 @@ export type DiagnosticEntry<T> =
   | ({ status: 'computed' } & T)
   | { status: 'not-defined'; code: string; reason: AnalysisErrorReason | null; message: string };
 
-export type DiagnosticsBlock = { [K in DiagnosticName]?: DiagnosticEntry<ResultsByName[K]> };
+/** Result keys are the check names in camelCase (JSON fields are camelCase; request values stay kebab-case). */
+type CamelKey<S extends string> = S extends `${infer Head}-${infer Tail}` ? `${Head}${Capitalize<CamelKey<Tail>>}` : S;
+export type DiagnosticResultKey = CamelKey<DiagnosticName>;
+
+export function diagnosticResultKey(name: DiagnosticName): DiagnosticResultKey {
+  return name.replace(/-([a-z])/g, (_, letter: string) => letter.toUpperCase()) as DiagnosticResultKey;
+}
+
+export type DiagnosticsBlock = { [K in DiagnosticName as CamelKey<K>]?: DiagnosticEntry<ResultsByName[K]> };
 
 export function validateDiagnosticNames(requested: unknown): DiagnosticName[] {
   if (requested === undefined || requested === 'all') return [...DIAGNOSTIC_NAMES];
@@ -126,7 +134,7 @@ export function runDiagnostics(
     },
   };
   for (const name of names) {
-    (block as Record<string, unknown>)[name] = runOne(runners[name] as () => object);
+    (block as Record<string, unknown>)[diagnosticResultKey(name)] = runOne(runners[name] as () => object);
   }
   return block;
 }

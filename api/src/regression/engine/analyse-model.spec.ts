@@ -1,5 +1,5 @@
 import { analyseModel } from './analyse-model';
-import { DIAGNOSTIC_NAMES } from './analyse-model-diagnostics';
+import { DIAGNOSTIC_NAMES, diagnosticResultKey } from './analyse-model-diagnostics';
 import { seededSource } from './diagnostics/seeded-series';
 import { fittedModel, rowMatrix } from './diagnostics/test-support';
 import { inverse, Matrix } from 'ml-matrix';
@@ -21,9 +21,9 @@ describe('analyseModel: coefficient table under the chosen covariance plus assum
   it('runs every check by default and reports which covariance was used', () => {
     const result = analyseModel({ ...base, covariance: { type: 'hc3' }, significanceLevel: 0.01 });
     expect(result.covariance.type).toBe('hc3');
-    expect(Object.keys(result.diagnostics).sort()).toEqual([...DIAGNOSTIC_NAMES].sort());
+    expect(Object.keys(result.diagnostics).sort()).toEqual(DIAGNOSTIC_NAMES.map(diagnosticResultKey).sort());
     for (const entry of Object.values(result.diagnostics)) expect(entry!.status).toBe('computed');
-    const bp = result.diagnostics['breusch-pagan']!;
+    const bp = result.diagnostics.breuschPagan!;
     if (bp.status !== 'computed') throw new Error('expected a result');
     expect(bp.significanceLevel).toBe(0.01);
     expect(bp.flagged).toBe(bp.pValue < 0.01);
@@ -86,6 +86,6 @@ describe('analyseModel: coefficient table under the chosen covariance plus assum
     const uplift = promoted.map((d) => 1 + 2 * d + source.normal());
     const result = analyseModel({ columns: { promoted, uplift }, response: 'uplift', predictors: ['promoted'], diagnostics: ['reset', 'jarque-bera'] });
     expect(result.diagnostics.reset).toEqual(expect.objectContaining({ status: 'not-defined', reason: 'test-not-defined' }));
-    expect(result.diagnostics['jarque-bera']!.status).toBe('computed');
+    expect(result.diagnostics.jarqueBera!.status).toBe('computed');
   });
 });

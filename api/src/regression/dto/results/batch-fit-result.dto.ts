@@ -59,7 +59,7 @@ export class BatchResponseFailureDto {
   @ApiProperty({
     enum: ENGINE_ERROR_CODES,
     description:
-      'Engine error code, for example non-finite-value, non-positive-log-argument (log forms), constant-response or length-mismatch.',
+      'Engine error code about this response alone: missing-column, length-mismatch, non-finite-value, non-positive-log-argument (log-y forms) or constant-response.',
     example: 'constant-response',
   })
   code: EngineErrorCode;

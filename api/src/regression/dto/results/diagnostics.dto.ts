@@ -18,7 +18,7 @@ function computedOrNotDefined(check: new () => object): { oneOf: { $ref: string 
 const PRESENCE = 'Present only when this check was requested (all checks run by default).';
 
 /**
- * The assumption checks of one analysis, keyed by check name as the engine reports them (engine:
+ * The assumption checks of one analysis, keyed by check name in camelCase (the request names checks in kebab-case, e.g. breusch-pagan → breuschPagan) (engine:
  * DiagnosticsBlock). Each entry is either the check's result (status computed) or a not-defined entry
  * (status not-defined); `status` tells them apart.
  */
@@ -43,7 +43,7 @@ export class DiagnosticsDto {
     ...computedOrNotDefined(BreuschPaganCheckDto),
     description: `Constant error variance: Breusch-Pagan, Koenker’s studentised LM = n·R² by default or the original ESS/2. ${PRESENCE}`,
   })
-  'breusch-pagan'?: BreuschPaganCheckDto | DiagnosticNotDefinedDto;
+  breuschPagan?: BreuschPaganCheckDto | DiagnosticNotDefinedDto;
 
   @ApiPropertyOptional({
     ...computedOrNotDefined(WhiteCheckDto),
@@ -55,19 +55,19 @@ export class DiagnosticsDto {
     ...computedOrNotDefined(DurbinWatsonCheckDto),
     description: `First-order serial correlation: Durbin-Watson d with a beta-approximation p-value. ${PRESENCE}`,
   })
-  'durbin-watson'?: DurbinWatsonCheckDto | DiagnosticNotDefinedDto;
+  durbinWatson?: DurbinWatsonCheckDto | DiagnosticNotDefinedDto;
 
   @ApiPropertyOptional({
     ...computedOrNotDefined(BreuschGodfreyCheckDto),
     description: `Serial correlation up to a lag: Breusch-Godfrey, n·R² (zero-filled lags) or F form. ${PRESENCE}`,
   })
-  'breusch-godfrey'?: BreuschGodfreyCheckDto | DiagnosticNotDefinedDto;
+  breuschGodfrey?: BreuschGodfreyCheckDto | DiagnosticNotDefinedDto;
 
   @ApiPropertyOptional({
     ...computedOrNotDefined(JarqueBeraCheckDto),
     description: `Normal errors: Jarque-Bera from moment-based skewness and kurtosis. ${PRESENCE}`,
   })
-  'jarque-bera'?: JarqueBeraCheckDto | DiagnosticNotDefinedDto;
+  jarqueBera?: JarqueBeraCheckDto | DiagnosticNotDefinedDto;
 
   @ApiPropertyOptional({
     ...computedOrNotDefined(CollinearityCheckDto),
