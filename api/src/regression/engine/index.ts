@@ -1,4 +1,4 @@
-/** Public surface of the regression engine (framework-free; see README.md in this folder). */
+/** Public surface of the regression engine (framework-free; see "The regression engine" in DEVELOPERS.md). */
 
 export { ENGINE_VERSION } from './version';
 export { EngineError, ENGINE_ERROR_CODES, isEngineError } from './errors';
