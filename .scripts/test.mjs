@@ -1,5 +1,6 @@
 // `npm test`: the same bootstrap as `npm start` with a throwaway database, then every suite. Ends with one
 // plain line "N passed, N failed" summed over all suites, and exits non-zero on any failure.
+import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { join } from 'node:path';
@@ -33,6 +34,24 @@ function readReport(file) {
   return { passed: report.numPassedTests ?? 0, failed: (report.numFailedTests ?? 0) + brokenSuites };
 }
 
+/**
+ * The SDK's and the console's generated types must come from the committed OpenAPI document: regenerate
+ * each into a scratch file and compare. Returns a description of the drift, or undefined.
+ */
+function checkGeneratedTypes() {
+  const generator = join(ROOT, 'node_modules', 'openapi-typescript', 'bin', 'cli.js');
+  const targets = [join(ROOT, 'sdk', 'src', 'api-schema.ts'), join(ROOT, 'console', 'src', 'lib', 'api-schema.d.ts')];
+  const drift = [];
+  for (const target of targets) {
+    if (!existsSync(target)) continue;
+    const scratch = join(RESULTS_DIR, `check-${target.endsWith('.d.ts') ? 'console' : 'sdk'}.ts`);
+    const result = spawnSync(process.execPath, [generator, join(ROOT, 'openapi', 'openapi.json'), '--default-non-nullable', 'false', '-o', scratch], { cwd: ROOT, encoding: 'utf8' });
+    if (result.status !== 0 || readFileSync(scratch, 'utf8') !== readFileSync(target, 'utf8')) drift.push(target.slice(ROOT.length + 1));
+  }
+  if (drift.length > 0) say(`generated types differ from openapi/openapi.json: ${drift.join(', ')} (run npm run generate -w sdk / npm run api-types -w console)`);
+  return drift.length > 0 ? drift.join(', ') : undefined;
+}
+
 async function main() {
   const started = Date.now();
   rmSync(RESULTS_DIR, { recursive: true, force: true });
@@ -63,11 +82,14 @@ async function main() {
 
     const drift = await runAsync(process.execPath, [join(ROOT, 'api', 'dist', 'openapi', 'write-openapi.js'), '--check'], { env });
     record('OpenAPI document is up to date', drift === 0 ? 1 : 0, drift === 0 ? 0 : 1);
+    const sdkDrift = checkGeneratedTypes();
+    record('SDK and console types match the OpenAPI document', sdkDrift ? 0 : 1, sdkDrift ? 1 : 0);
 
     const jestBin = join(ROOT, 'node_modules', 'jest', 'bin', 'jest.js');
     const suites = [
       { name: 'API unit tests', args: [jestBin, '--config', 'api/jest.unit.config.js'] },
       { name: 'API e2e tests', args: [jestBin, '--config', 'api/jest.e2e.config.js', '--runInBand'] },
+      { name: 'SDK unit tests', args: [jestBin, '--config', 'sdk/jest.config.js'] },
     ];
     if (existsSync(join(ROOT, 'test', 'jest.config.js'))) {
       const chromium = ensureChromium();

@@ -13,6 +13,7 @@ import { omitConsoleCsrfOnReads } from './auth/openapi-security';
 import { securityConfig } from './config/configuration';
 import { ProblemDetailsFilter } from './common/problem-details/problem-details.filter';
 import { createValidationPipe } from './common/problem-details/validation.pipe';
+import { addProblemResponses } from './common/problem-details/openapi-problems';
 import { generateRequestId, REQUEST_ID_HEADER } from './common/request-context/request-id';
 import { JsonLogger } from './common/logging/json-logger';
 import { registerConsoleHost } from './console-host/console-host';
@@ -118,7 +119,7 @@ export function buildOpenApiDocument(app: NestFastifyApplication): OpenAPIObject
       CSRF_SECURITY,
     )
     .build();
-  return omitConsoleCsrfOnReads(
-    SwaggerModule.createDocument(app, config, { operationIdFactory: (_controller, method) => method }),
+  return addProblemResponses(
+    omitConsoleCsrfOnReads(SwaggerModule.createDocument(app, config, { operationIdFactory: (_controller, method) => method })),
   );
 }

@@ -44,6 +44,643 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/v1/session/csrf-token": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Get a CSRF token
+         * @description Sets the httpOnly CSRF cookie if needed and returns the token to send in X-Leastline-Csrf.
+         */
+        get: operations["getCsrfToken"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/session": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The current session
+         * @description The signed-in account and its teams.
+         */
+        get: operations["getSession"];
+        put?: never;
+        /**
+         * Sign in
+         * @description Checks e-mail and password and sets the httpOnly, SameSite=Strict session cookie. After 5 failures for one address, further attempts are refused for a growing time (429 with Retry-After), whether or not it has an account.
+         */
+        post: operations["signIn"];
+        /**
+         * Sign out
+         * @description Ends this session on the server and clears the cookie.
+         */
+        delete: operations["signOut"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/password-resets": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Ask for a password-reset e-mail
+         * @description Always answers 202 with the same body; if the address has an account, a one-time link valid for 30 minutes is e-mailed.
+         */
+        post: operations["requestPasswordReset"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/password-resets/completion": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Set a new password with an e-mailed link
+         * @description Spends the link, sets the password and signs the account out everywhere.
+         */
+        post: operations["completePasswordReset"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/teams": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * List your teams
+         * @description Every team the signed-in account belongs to, with its role.
+         */
+        get: operations["listTeams"];
+        put?: never;
+        /**
+         * Create a team
+         * @description The signed-in account becomes its owner.
+         */
+        post: operations["createTeam"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/teams/{teamId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Get a team */
+        get: operations["getTeam"];
+        put?: never;
+        post?: never;
+        /**
+         * Delete a team
+         * @description Removes the team with its members, invitations, keys and audit log.
+         */
+        delete: operations["deleteTeam"];
+        options?: never;
+        head?: never;
+        /** Rename a team or change its settings */
+        patch: operations["updateTeam"];
+        trace?: never;
+    };
+    "/v1/teams/{teamId}/ownership-transfer": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Transfer ownership
+         * @description The named member becomes owner; you become admin.
+         */
+        post: operations["transferOwnership"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/teams/{teamId}/plan": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        /** Change the plan */
+        put: operations["changePlan"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/teams/{teamId}/members": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** List members */
+        get: operations["listMembers"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/teams/{teamId}/members/{userId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        /**
+         * Remove a member
+         * @description The owner cannot be removed.
+         */
+        delete: operations["removeMember"];
+        options?: never;
+        head?: never;
+        /**
+         * Change a member's role
+         * @description The owner's role changes only by ownership transfer.
+         */
+        patch: operations["changeMemberRole"];
+        trace?: never;
+    };
+    "/v1/teams/{teamId}/invitations": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** List open invitations */
+        get: operations["listInvitations"];
+        put?: never;
+        /**
+         * Invite someone by e-mail
+         * @description E-mails a one-time link valid for 7 days. A new invitation to the same address replaces the open one.
+         */
+        post: operations["createInvitation"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/teams/{teamId}/invitations/{invitationId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        /**
+         * Withdraw an invitation
+         * @description Its link stops working at once.
+         */
+        delete: operations["withdrawInvitation"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/invitations/preview": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Look at an invitation before accepting
+         * @description Changes nothing.
+         */
+        post: operations["previewInvitation"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/invitations/acceptance": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Accept an invitation
+         * @description Signed in as the invited address: joins the team. Not signed in and the address has no account: send displayName and password; the account is created, joins the team and is signed in (session cookie).
+         */
+        post: operations["acceptInvitation"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/teams/{teamId}/api-keys": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * List API keys
+         * @description Owners and admins see every key; developers see their own.
+         */
+        get: operations["listApiKeys"];
+        put?: never;
+        /**
+         * Create an API key
+         * @description The answer holds the full key; it is never shown again.
+         */
+        post: operations["createApiKey"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/teams/{teamId}/api-keys/{keyId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Get an API key */
+        get: operations["getApiKey"];
+        put?: never;
+        post?: never;
+        /**
+         * Revoke an API key
+         * @description Immediate: the next request with the key is refused.
+         */
+        delete: operations["revokeApiKey"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/teams/{teamId}/api-keys/{keyId}/rotation": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Rotate an API key
+         * @description Issues a replacement with the same name, scopes and expiry. The old key keeps working for `overlapHours` (default 24), then is refused as rotated out. A notice is e-mailed to the key creator.
+         */
+        post: operations["rotateApiKey"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/api-keys/current": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Describe the calling API key
+         * @description Checks a key without side effects: its team, scopes and the team plan. Needs no scope.
+         */
+        get: operations["describeCurrentApiKey"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/teams/{teamId}/audit-events": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Read the audit log
+         * @description Newest first, cursor-paginated; a `Link: <…>; rel="next"` header accompanies every page but the last.
+         */
+        get: operations["listAuditEvents"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/usage": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Metered usage by day, key and endpoint
+         * @description Billable calls in [from, to] (UTC days, both inclusive; at most 366 days). Each call is metered exactly once.
+         */
+        get: operations["getUsage"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/usage/overview": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** This period’s units, requests by day, error rate and recent requests */
+        get: operations["getUsageOverview"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/datasets": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * List datasets, newest first
+         * @description Cursor pagination: pass `nextCursor` as `cursor`; the `Link` header (rel="next") carries the same URL.
+         */
+        get: operations["listDatasets"];
+        put?: never;
+        /**
+         * Store a dataset from JSON columns or rows
+         * @description Stores a new immutable version of the named dataset. Numeric columns are detected (every non-empty value a number); null or "" is a missing value. The answer carries per-column summaries and the content hash.
+         */
+        post: operations["createDataset"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/datasets/csv": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Upload a CSV file as a dataset
+         * @description Send the file as `multipart/form-data` (one part named `file`) or as the raw body with `Content-Type: text/csv`. The first line is the header; UTF-8 (a byte-order mark is ignored); comma-separated unless `delimiter` says otherwise; empty cells are missing values. Files are streamed: up to LEASTLINE_UPLOAD_LIMIT_BYTES (2 GiB by default), answered with 413 beyond it. Data rows in error messages are numbered from 1 (the header is not counted).
+         */
+        post: operations["uploadDatasetCsv"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/datasets/{datasetId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** A dataset’s metadata and column summaries */
+        get: operations["getDataset"];
+        put?: never;
+        post?: never;
+        /**
+         * Delete a dataset version
+         * @description Soft delete: the dataset disappears from listings and cannot be fitted; the team audit log records it.
+         */
+        delete: operations["deleteDataset"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/datasets/{datasetId}/rows": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** A page of a dataset’s rows (offset paging; datasets never change) */
+        get: operations["getDatasetRows"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/fits": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Fit a least-squares model
+         * @description Estimates the model on inline columns or a stored dataset and returns the full result: coefficients (classical), ANOVA, R², standard error of estimate, information criteria, effects in the form’s units, the inference block under the chosen covariance (with a Wald test of all slopes) and the assumption checks. The result is stored: fetch it again with `GET /v1/results/{resultId}`; `inputHash` and `engineVersion` identify exactly what was computed.
+         */
+        post: operations["createFit"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/form-comparisons": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Fit and rank the functional forms
+         * @description Fits every requested form the data allow (lin-lin, log-lin, lin-log, log-log) and ranks them on criteria comparable across a transformed response: AIC and BIC of y itself (the log-likelihood of a ln y model is Jacobian-adjusted by −Σ ln y), and R² and the standard error recomputed on the original scale. Forms the data do not allow are listed with the reason.
+         */
+        post: operations["compareForms"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/predictions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Predict at new predictor values
+         * @description From a stored fit (`fitId`) or an inline specification (`data` + `model`). Each point gets the fitted value with a confidence interval for the mean and a prediction interval for a new observation, on the model’s scale and, for log-y forms, back on the original scale (the median exp(ŷ), the normal-theory mean and Duan’s smeared mean).
+         */
+        post: operations["createPrediction"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batch-fits": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Fit many responses against one set of predictors
+         * @description One shared factorisation of the predictors, then each response’s full coefficient table, R² and F-test. A response the data do not allow (constant, non-finite, log of a non-positive value) is reported in its own entry; the rest are fitted.
+         */
+        post: operations["createBatchFit"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/rolling-fits": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Rolling-window fits over a time-ordered series
+         * @description Refits the model in every window of `window` rows, moving `step` rows at a time, with updating cross-products (the cost grows with the series length, not length × window). Returns the coefficient path with classical standard errors, R² and the standard error of estimate per window.
+         */
+        post: operations["createRollingFit"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/results/{resultId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Fetch a stored result again
+         * @description Any billable answer (fit, comparison, prediction, batch or rolling fit) as it was stored, with its specification and input hash. Per-row arrays of fits over more than 100,000 rows, and paths of rolling fits with more than 100,000 windows, are not kept.
+         */
+        get: operations["getResult"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -68,6 +705,2276 @@ export interface components {
              * @example 2
              */
             databaseMilliseconds: number;
+        };
+        CsrfTokenDto: {
+            /** @description Send this value in the X-Leastline-Csrf header on POST, PUT, PATCH and DELETE. */
+            csrfToken: string;
+        };
+        SignInDto: {
+            /** @example olu.owner@quillfeather.example.test */
+            email: string;
+            /** @example correct-horse-quill-22 */
+            password: string;
+        };
+        AccountDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example olu.owner@quillfeather.example.test */
+            email: string;
+            /** @example Olu Okafor (invented) */
+            displayName: string;
+        };
+        SessionMembershipDto: {
+            /** Format: uuid */
+            teamId: string;
+            /** @example Quillfeather Payments (invented demo team) */
+            teamName: string;
+            /** @enum {string} */
+            role: "owner" | "admin" | "developer" | "billing";
+        };
+        SessionDto: {
+            account: components["schemas"]["AccountDto"];
+            /** @description Teams this account belongs to, with its role in each. */
+            memberships: components["schemas"]["SessionMembershipDto"][];
+            /**
+             * Format: date-time
+             * @description When the session ends; sign in again after that.
+             */
+            expiresAt: string;
+        };
+        RequestPasswordResetDto: {
+            /** @example olu.owner@quillfeather.example.test */
+            email: string;
+        };
+        PasswordResetAcceptedDto: {
+            /**
+             * @description The same answer whether or not the address has an account.
+             * @example If an account uses this address, a reset link is on its way. It expires in 30 minutes.
+             */
+            message: string;
+        };
+        CompletePasswordResetDto: {
+            /**
+             * @description The token from the e-mailed link (the part after "token=").
+             * @example q0Wc7u2b3x-9N7wq5hC2sZc1vM4yR8aLkT6pD0fE1gH
+             */
+            token: string;
+            /** @description At least 12 characters, at most 72 bytes. */
+            newPassword: string;
+        };
+        TeamDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example quillfeather-demo */
+            slug: string;
+            /** @example Quillfeather Payments (invented demo team) */
+            name: string;
+            /** @enum {string} */
+            plan: "starter" | "growth" | "scale";
+            /** @description True for the invented demo team that the seed creates. */
+            isDemo: boolean;
+            /** @description Whether developers may create and rotate their own API keys. */
+            developerKeysAllowed: boolean;
+            /**
+             * @description The caller's role in this team.
+             * @enum {string}
+             */
+            yourRole: "owner" | "admin" | "developer" | "billing";
+        };
+        TeamListDto: {
+            items: components["schemas"]["TeamDto"][];
+        };
+        CreateTeamDto: {
+            /** @example Quillfeather risk analytics (invented) */
+            name: string;
+            /**
+             * @description Lower-case letters, digits and hyphens, 3–64 characters; derived from the name when omitted.
+             * @example quillfeather-risk
+             */
+            slug?: string;
+        };
+        UpdateTeamDto: {
+            name?: string;
+            /** @description Allow developers to create, rotate and revoke their own API keys. */
+            developerKeysAllowed?: boolean;
+        };
+        TransferOwnershipDto: {
+            /**
+             * Format: uuid
+             * @description A current member who becomes the owner; the previous owner becomes admin.
+             */
+            newOwnerUserId: string;
+        };
+        ChangePlanDto: {
+            /** @enum {string} */
+            plan: "starter" | "growth" | "scale";
+        };
+        MemberDto: {
+            /** Format: uuid */
+            userId: string;
+            /** @example dev.dana@quillfeather.example.test */
+            email: string;
+            /** @example Dana Devlin (invented) */
+            displayName: string;
+            /** @enum {string} */
+            role: "owner" | "admin" | "developer" | "billing";
+            /** Format: date-time */
+            joinedAt: string;
+        };
+        MemberListDto: {
+            items: components["schemas"]["MemberDto"][];
+        };
+        ChangeRoleDto: {
+            /**
+             * @description Ownership moves only through ownership transfer.
+             * @enum {string}
+             */
+            role: "admin" | "developer" | "billing";
+        };
+        InvitationDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example new.analyst@quillfeather.example.test */
+            email: string;
+            /** @enum {string} */
+            role: "owner" | "admin" | "developer" | "billing";
+            /** @enum {string} */
+            status: "pending" | "expired";
+            /** Format: uuid */
+            invitedByUserId: string | null;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            expiresAt: string;
+        };
+        InvitationListDto: {
+            /** @description Invitations neither accepted nor withdrawn. */
+            items: components["schemas"]["InvitationDto"][];
+        };
+        CreateInvitationDto: {
+            /** @example new.analyst@quillfeather.example.test */
+            email: string;
+            /** @enum {string} */
+            role: "admin" | "developer" | "billing";
+        };
+        InvitationTokenDto: {
+            /** @description The token from the e-mailed link (the part after "token="). */
+            token: string;
+        };
+        InvitationPreviewDto: {
+            /** @example Quillfeather Payments (invented demo team) */
+            teamName: string;
+            /** @enum {string} */
+            role: "owner" | "admin" | "developer" | "billing";
+            /** @example new.analyst@quillfeather.example.test */
+            email: string;
+            /** Format: date-time */
+            expiresAt: string;
+            /** @description True when the invited address already has an account: sign in as it, then accept. */
+            accountExists: boolean;
+        };
+        AcceptInvitationDto: {
+            /** @description The token from the e-mailed link (the part after "token="). */
+            token: string;
+            /** @description Needed only when the invited address has no account yet. */
+            displayName?: string;
+            /** @description Needed only when the invited address has no account yet; at least 12 characters. */
+            password?: string;
+        };
+        InvitationAcceptanceDto: {
+            /** Format: uuid */
+            teamId: string;
+            /** @example Quillfeather Payments (invented demo team) */
+            teamName: string;
+            /** @enum {string} */
+            role: "owner" | "admin" | "developer" | "billing";
+            account: components["schemas"]["AccountDto"];
+            /** @description True when accepting created the account (and signed it in with a new session cookie). */
+            accountCreated: boolean;
+        };
+        ApiKeyDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example settlement-forecast job (invented) */
+            name: string;
+            /**
+             * @description The visible start of the key, enough to recognise it.
+             * @example llsq1_7k2m9x4r8t3v_…
+             */
+            prefix: string;
+            scopes: ("fits:run" | "datasets:read" | "datasets:write" | "usage:read")[];
+            /**
+             * @description retiring: rotated, still accepted until retiresAt; rotated-out, expired and revoked keys are refused.
+             * @enum {string}
+             */
+            status: "active" | "retiring" | "rotated-out" | "expired" | "revoked";
+            /** Format: uuid */
+            createdByUserId: string | null;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            expiresAt: string | null;
+            /**
+             * Format: date-time
+             * @description Up to about 10 s behind.
+             */
+            lastUsedAt: string | null;
+            /** @example 203.0.113.7 */
+            lastUsedIp: string | null;
+            /** Format: date-time */
+            revokedAt: string | null;
+            /**
+             * Format: date-time
+             * @description Set by rotation: the end of the overlap.
+             */
+            retiresAt: string | null;
+            /** Format: uuid */
+            replacedByKeyId: string | null;
+        };
+        ApiKeyListDto: {
+            /** @description Developers see only the keys they created; owners and admins see all. */
+            items: components["schemas"]["ApiKeyDto"][];
+        };
+        CreateApiKeyDto: {
+            /** @example settlement-forecast job (invented) */
+            name: string;
+            /**
+             * @example [
+             *       "fits:run",
+             *       "datasets:read"
+             *     ]
+             */
+            scopes: ("fits:run" | "datasets:read" | "datasets:write" | "usage:read")[];
+            /**
+             * Format: date-time
+             * @description When the key stops working; in the future, at most 3 years ahead.
+             */
+            expiresAt?: string;
+        };
+        CreatedApiKeyDto: {
+            apiKey: components["schemas"]["ApiKeyDto"];
+            /**
+             * @description The full key. Shown only in this answer: Leastline keeps only a hash of its secret.
+             * @example llsq1_7k2m9x4r8t3v_…
+             */
+            plaintextKey: string;
+        };
+        RotateApiKeyDto: {
+            /**
+             * @description Hours the old key keeps working next to the new one (0 = it stops at once).
+             * @default 24
+             */
+            overlapHours?: number;
+        };
+        ApiPrincipalDto: {
+            /** Format: uuid */
+            teamId: string;
+            /**
+             * Format: uuid
+             * @description The key's id as listed in the console.
+             */
+            keyId: string;
+            scopes: ("fits:run" | "datasets:read" | "datasets:write" | "usage:read")[];
+            /** @example growth */
+            teamPlan: string;
+        };
+        AuditActorDto: {
+            /**
+             * Format: uuid
+             * @description The signed-in person, if any.
+             */
+            userId: string | null;
+            /**
+             * @description The person's e-mail address at the time.
+             * @example ada.admin@quillfeather.example.test
+             */
+            email: string | null;
+            /**
+             * Format: uuid
+             * @description The API key, for actions made through the public API.
+             */
+            apiKeyId: string | null;
+        };
+        AuditTargetDto: {
+            /**
+             * @description Kind of thing acted on.
+             * @example api-key
+             */
+            type: string;
+            /** @example 0b5e2a4e-5f0e-4a9b-9a57-0d1f1c7e2a10 */
+            id: string;
+        };
+        AuditEventDto: {
+            /**
+             * @description Increasing identifier (a decimal string).
+             * @example 1042
+             */
+            id: string;
+            /** @enum {string} */
+            action: "session.signed-in" | "team.created" | "team.updated" | "team.plan-changed" | "team.ownership-transferred" | "member.role-changed" | "member.removed" | "invitation.created" | "invitation.revoked" | "invitation.accepted" | "api-key.created" | "api-key.rotated" | "api-key.revoked" | "dataset.created" | "dataset.deleted";
+            /** Format: date-time */
+            occurredAt: string;
+            actor: components["schemas"]["AuditActorDto"];
+            /**
+             * @description Network address the request came from.
+             * @example 203.0.113.7
+             */
+            ipAddress: string | null;
+            target: components["schemas"]["AuditTargetDto"] | null;
+            /** @description Action-specific facts, e.g. old and new role. */
+            details: {
+                [key: string]: unknown;
+            };
+        };
+        AuditEventPageDto: {
+            items: components["schemas"]["AuditEventDto"][];
+            /** @description Pass as `cursor` for the next page; null on the last page. */
+            nextCursor: string | null;
+        };
+        UsageRowDto: {
+            /**
+             * @description UTC day.
+             * @example 2026-11-18
+             */
+            day: string;
+            /** @description The key the calls were made with; null for console calls without a key. */
+            apiKeyId: string | null;
+            /**
+             * @description Billable endpoint: fits, form-comparisons, predictions, batch-fits, rolling-fits.
+             * @example fits
+             */
+            endpoint: string;
+            /** @description Billable calls. */
+            requests: number;
+            /** @description Units charged: models + ceil(observations / 10 000) per call. */
+            units: number;
+            /** @description Observations used. */
+            observations: number;
+        };
+        UsageTotalsDto: {
+            requests: number;
+            units: number;
+            observations: number;
+        };
+        UsageReportDto: {
+            /** @example 2026-11-01 */
+            from: string;
+            /** @example 2026-11-30 */
+            to: string;
+            /** @description One row per day, key and endpoint with any billable call. */
+            rows: components["schemas"]["UsageRowDto"][];
+            totals: components["schemas"]["UsageTotalsDto"];
+            /**
+             * @description The units rule, as applied.
+             * @example units = models + ceil(observations / 10000), at least 1 per call
+             */
+            unitsRule: string;
+        };
+        DailyRequestsDto: {
+            /** @example 2026-11-18 */
+            day: string;
+            /** @description Public-API requests, any outcome. */
+            requests: number;
+            /** @description Requests answered with status ≥ 400. */
+            errors: number;
+        };
+        RecentRequestDto: {
+            /** @example POST */
+            method: string;
+            /** @example /v1/fits */
+            route: string;
+            /** @example 201 */
+            status: number;
+            /**
+             * @description Server time in milliseconds.
+             * @example 12.4
+             */
+            durationMs: number;
+            requestId: string;
+            apiKeyId: string | null;
+            /** Format: date-time */
+            at: string;
+        };
+        UsageOverviewDto: {
+            /** @example growth */
+            plan: string;
+            /**
+             * @description First day of the current billing period (calendar month, UTC).
+             * @example 2026-12-01
+             */
+            periodStart: string;
+            /** @description Units used this period. */
+            unitsThisPeriod: number;
+            /** @description Units included in the plan per period. */
+            includedUnits: number;
+            /** @description The last 30 days. */
+            requestsByDay: components["schemas"]["DailyRequestsDto"][];
+            /** @description Share of the last 30 days’ requests answered with status ≥ 400 (0 when there were none). */
+            errorRate: number;
+            /** @description The 20 most recent public-API requests. */
+            recentRequests: components["schemas"]["RecentRequestDto"][];
+        };
+        CreateDatasetDto: {
+            /**
+             * @description Dataset name; uploading again under the same name makes a new version.
+             * @example quillfeather-settlements
+             */
+            name: string;
+            /**
+             * @description Columns by name, each an array of equal length; numbers, strings, or null for missing.
+             * @example {
+             *       "ticket_size": [
+             *         12.5,
+             *         80,
+             *         43.2
+             *       ],
+             *       "chargeback_rate": [
+             *         0.004,
+             *         0.011,
+             *         0.007
+             *       ]
+             *     }
+             */
+            columns?: {
+                [key: string]: ((number | string) | null)[];
+            };
+            /** @description Rows as objects; the first row names the columns. Use either `columns` or `rows`. */
+            rows?: {
+                [key: string]: (number | string) | null;
+            }[];
+        };
+        DatasetColumnDto: {
+            /** @example ticket_size */
+            name: string;
+            /**
+             * @description numeric when every non-empty cell is a plain decimal number; otherwise text.
+             * @enum {string}
+             */
+            kind: "numeric" | "text";
+            /**
+             * @description Cells with a value.
+             * @example 5000
+             */
+            count: number;
+            /**
+             * @description Empty cells (missing values).
+             * @example 0
+             */
+            missing: number;
+            /** @description Mean of the values (numeric columns only). */
+            mean: number | null;
+            /** @description Sample standard deviation, n − 1 denominator (numeric columns with at least two values). */
+            standardDeviation: number | null;
+            min: number | null;
+            max: number | null;
+            /** @description For a text column: the 1-based data row of its first non-number. */
+            firstTextRow?: number;
+            /** @description For a text column: that first non-number (up to 80 characters). */
+            firstTextValue?: string;
+        };
+        DatasetDto: {
+            /** Format: uuid */
+            id: string;
+            /** @example quillfeather-settlements */
+            name: string;
+            /**
+             * @description Each upload under the same name is a new version, starting at 1.
+             * @example 1
+             */
+            version: number;
+            /** @description SHA-256 (hex) over each column name, kind and stored bytes, in order: identical content, identical hash. */
+            contentHash: string;
+            /** @example 5000 */
+            rowCount: number;
+            /** @description Bytes stored for the column data. */
+            byteSize: number;
+            /** @enum {string} */
+            source: "csv" | "json";
+            /** @description Who uploaded it (key or user). */
+            createdBy: string | null;
+            /** Format: date-time */
+            createdAt: string;
+            columns: components["schemas"]["DatasetColumnDto"][];
+        };
+        DatasetListDto: {
+            items: components["schemas"]["DatasetDto"][];
+            /** @description Pass as `cursor` for the next page; null on the last page. */
+            nextCursor: string | null;
+        };
+        DatasetRowsDto: {
+            /** Format: uuid */
+            datasetId: string;
+            /** @description Column names, in the order of each row. */
+            columns: string[];
+            /** @description 0-based index of the first row returned. */
+            offset: number;
+            limit: number;
+            /** @description Rows in the dataset. */
+            total: number;
+            /** @description Rows; null marks a missing value. */
+            rows: ((number | string) | null)[][];
+        };
+        DataSourceDto: {
+            /**
+             * @description Columns by name, each an array of equal length. Numbers; null marks a missing value (see `missingValues`). Group columns for cluster-robust covariance may hold strings.
+             * @example {
+             *       "chargeback_rate": [
+             *         0.0041,
+             *         0.0062,
+             *         0.0055,
+             *         0.0089,
+             *         0.0102
+             *       ],
+             *       "ticket_size": [
+             *         18.5,
+             *         42,
+             *         35.2,
+             *         77.9,
+             *         96.4
+             *       ]
+             *     }
+             */
+            columns?: {
+                [key: string]: ((number | string) | null)[];
+            };
+            /**
+             * Format: uuid
+             * @description Id of a stored dataset of your team (instead of `columns`).
+             */
+            datasetId?: string;
+        };
+        ModelSpecDto: {
+            /**
+             * @description Response (dependent) column.
+             * @example chargeback_rate
+             */
+            response: string;
+            /**
+             * @description Predictor columns, in order.
+             * @example [
+             *       "ticket_size"
+             *     ]
+             */
+            predictors: string[];
+            /**
+             * @description lin-lin: y on x. log-lin: ln y on x. lin-log: y on ln x. log-log: ln y on ln x. Logs are natural logs; a non-positive value where a log is needed is an error naming the column and row.
+             * @default lin-lin
+             * @enum {string}
+             */
+            form?: "lin-lin" | "log-lin" | "lin-log" | "log-log";
+            /**
+             * @description Estimate an intercept.
+             * @default true
+             */
+            intercept?: boolean;
+            /** @description Column of positive weights for weighted least squares (minimises Σ wᵢ eᵢ²). */
+            weights?: string;
+        };
+        CovarianceChoiceDto: {
+            /**
+             * @description classical: s²(X'WX)⁻¹. hc0: (X'X)⁻¹X' diag(e²) X(X'X)⁻¹ (White). hc1: hc0 × n/(n−p). hc2: e²/(1−h). hc3: e²/(1−h)². newey-west: HAC with Bartlett weights 1 − l/(L+1). cluster: CR1 with factor G/(G−1)·(n−1)/(n−p); t-tests then use G−1 degrees of freedom.
+             * @enum {string}
+             */
+            type: "classical" | "hc0" | "hc1" | "hc2" | "hc3" | "newey-west" | "cluster";
+            /** @description newey-west only: the lag L, an integer ≥ 0, or "automatic" = floor(4·(n/100)^(2/9)) (the default). */
+            lag?: number | "automatic";
+            /** @description newey-west only: multiply by n/(n−p) (default false). */
+            smallSampleCorrection?: boolean;
+            /** @description cluster only: the column holding each row’s group (numbers or strings). */
+            groupColumn?: string;
+        };
+        DiagnosticOptionsDto: {
+            /**
+             * @description RESET: highest power of the fitted values (ŷ², …, ŷ^k).
+             * @default 3
+             */
+            resetMaxPower?: number;
+            /**
+             * @description Breusch-Pagan: Koenker’s studentised LM (default) or the original.
+             * @default studentised
+             * @enum {string}
+             */
+            breuschPaganVariant?: "studentised" | "original";
+            /**
+             * @description Breusch-Godfrey: highest residual lag.
+             * @default 1
+             */
+            breuschGodfreyLag?: number;
+            /**
+             * @description Breusch-Godfrey: n·R² chi-square (lm) or the F form.
+             * @default lm
+             * @enum {string}
+             */
+            breuschGodfreyVariant?: "lm" | "f";
+            /**
+             * @description Durbin-Watson: the alternative tested.
+             * @default positive
+             * @enum {string}
+             */
+            durbinWatsonAlternative?: "positive" | "negative" | "two-sided";
+        };
+        CreateFitDto: {
+            data: components["schemas"]["DataSourceDto"];
+            /**
+             * @description Level of confidence and prediction intervals, strictly between 0 and 1.
+             * @default 0.95
+             */
+            confidenceLevel?: number;
+            /**
+             * @description reject: any missing value in the model’s columns is an error listing the rows (0-based). drop-rows: rows with a missing value in any used column are left out (listwise); the answer lists them.
+             * @default reject
+             * @enum {string}
+             */
+            missingValues?: "drop-rows" | "reject";
+            model: components["schemas"]["ModelSpecDto"];
+            /** @description Covariance behind the inference block (default classical). */
+            covariance?: components["schemas"]["CovarianceChoiceDto"];
+            /** @description Assumption checks to run: "all" (default), "none", or a list. */
+            diagnostics?: ("all" | "none") | ("reset" | "breusch-pagan" | "white" | "durbin-watson" | "breusch-godfrey" | "jarque-bera" | "collinearity")[];
+            /**
+             * @description Level at which each check is flagged (p-value below it), strictly between 0 and 1.
+             * @default 0.05
+             */
+            significanceLevel?: number;
+            diagnosticOptions?: components["schemas"]["DiagnosticOptionsDto"];
+            /**
+             * @description Also return per-row fitted values, residuals, standardised and studentised residuals, leverage and Cook’s distance.
+             * @default false
+             */
+            includeObservations?: boolean;
+        };
+        UsageChargeDto: {
+            /** @description Units charged for this call: models + ceil(observations / 10 000), at least 1. */
+            units: number;
+            /** @description Observations counted. */
+            observations: number;
+        };
+        DataSourceDescriptionDto: {
+            /** @enum {string} */
+            kind: "inline" | "dataset" | "stored-fit";
+            /** Format: uuid */
+            datasetId?: string;
+            datasetName?: string;
+            datasetVersion?: number;
+            /** @description The dataset version’s content hash (SHA-256). */
+            datasetContentHash?: string;
+            /**
+             * Format: uuid
+             * @description Predictions from a stored fit: its id.
+             */
+            fitId?: string;
+            /** @description Predictions from a stored fit: its input hash. */
+            fitInputHash?: string;
+        };
+        RowAccountingDto: {
+            /** @description Rows in the data sent or stored. */
+            total: number;
+            /** @description Rows the model used. */
+            used: number;
+            /** @description Rows left out for missing values (missingValues = drop-rows). */
+            droppedCount: number;
+            /** @description The first 100 dropped rows, 0-based. */
+            dropped: number[];
+        };
+        FitTransformationsDto: {
+            /**
+             * @description natural-log for log-lin and log-log (the model explains ln y); none otherwise.
+             * @example none
+             * @enum {string}
+             */
+            response: "none" | "natural-log";
+            /**
+             * @description natural-log for lin-log and log-log (every predictor enters as ln x); none otherwise.
+             * @example none
+             * @enum {string}
+             */
+            predictors: "none" | "natural-log";
+        };
+        IntervalDto: {
+            /**
+             * @description Lower end.
+             * @example 0.0000651
+             */
+            lower: number;
+            /**
+             * @description Upper end.
+             * @example 0.0000973
+             */
+            upper: number;
+        };
+        CoefficientEstimateDto: {
+            /**
+             * @description Coefficient name: "(intercept)" for the constant (always first when present), otherwise the predictor column name.
+             * @example ticket_size
+             */
+            term: string;
+            /**
+             * @description Least-squares coefficient b_j on the model’s scale: per unit of x for lin-lin, a slope of ln y for log-lin, per unit of ln x for lin-log, an elasticity for log-log. See `effects` for the practitioner’s reading.
+             * @example 0.0000812
+             */
+            estimate: number;
+            /**
+             * @description s·√[(X′WX)⁻¹]_jj with s² = RSS/(n − p), in the units of the estimate; 0 for a perfect fit.
+             * @example 0.0000081
+             */
+            standardError: number;
+            /**
+             * @description b_j / standardError, referred to Student’s t with n − p degrees of freedom; null when the standard error is 0 (perfect fit).
+             * @example 10.02
+             */
+            tStatistic: number | null;
+            /**
+             * @description Two-sided P(|T| ≥ |t|), T ~ t(n − p), computed from one tail and doubled so values down to about 1e-308 keep their relative accuracy; null when tStatistic is null.
+             * @example 3.4e-19
+             */
+            pValue: number | null;
+            /** @description b_j ∓ t_{(1+level)/2, n−p}·standardError at the fit’s confidenceLevel, in the units of the estimate; both ends equal the estimate for a perfect fit. */
+            confidenceInterval: components["schemas"]["IntervalDto"];
+        };
+        AnovaLineDto: {
+            /**
+             * @description Degrees of freedom of this line.
+             * @example 198
+             */
+            degreesOfFreedom: number;
+            /**
+             * @description Sum of squares on the model’s scale (weighted by w_i for a weighted fit), accumulated in double-double.
+             * @example 0.000412
+             */
+            sumOfSquares: number;
+            /**
+             * @description sumOfSquares / degreesOfFreedom.
+             * @example 0.00000208
+             */
+            meanSquare: number;
+        };
+        AnovaTableDto: {
+            /** @description Explained line: sum of squares = total − residual; p − 1 degrees of freedom with an intercept, p without one. */
+            regression: components["schemas"]["AnovaLineDto"];
+            /** @description Residual line: RSS = Σ w_i (y_i − ŷ_i)² (w_i = 1 without weights) on n − p degrees of freedom; its mean square is s². */
+            residual: components["schemas"]["AnovaLineDto"];
+            /** @description Total line: Σ w_i (y_i − ȳ_w)² on n − 1 degrees of freedom with an intercept; the uncentred Σ w_i y_i² on n degrees of freedom without one. Its mean square is total sum of squares / total degrees of freedom. */
+            total: components["schemas"]["AnovaLineDto"];
+            /**
+             * @description Regression mean square / residual mean square: the joint test that every slope (every coefficient, for a model without an intercept) is 0. Null when RSS is 0 (perfect fit).
+             * @example 100.4
+             */
+            fStatistic: number | null;
+            /**
+             * @description Upper-tail probability of fStatistic under F(regression df, residual df); null when fStatistic is null.
+             * @example 3.4e-19
+             */
+            fPValue: number | null;
+        };
+        InformationCriteriaDto: {
+            /**
+             * @description Maximised normal log-likelihood −n/2·(ln 2π + ln(RSS/n) + 1) + ½·Σ ln w_i, with σ² estimated by RSS/n (the maximum-likelihood estimate) and the weight term present only for a weighted fit. On the model’s scale: for a log-y form it is the likelihood of ln y (see originalScale for y itself). Null for a perfect fit, where it is unbounded.
+             * @example 1016.3
+             */
+            logLikelihood: number | null;
+            /**
+             * @description −2·logLikelihood + 2k with k = parameterCount. Lower is better. Null for a perfect fit.
+             * @example -2026.6
+             */
+            aic: number | null;
+            /**
+             * @description −2·logLikelihood + k·ln n with k = parameterCount. Lower is better. Null for a perfect fit.
+             * @example -2016.7
+             */
+            bic: number | null;
+            /**
+             * @description k = p + 1: the coefficients (intercept included) plus one for the error standard deviation σ.
+             * @example 3
+             */
+            parameterCount: number;
+        };
+        CoefficientEffectDto: {
+            /**
+             * @description Predictor column name.
+             * @example ticket_size
+             */
+            term: string;
+            /**
+             * @description response-units-per-predictor-unit (lin-lin), percent-per-predictor-unit (log-lin), response-units-per-percent (lin-log: change in y for a 1% rise in x), percent-per-percent (log-log).
+             * @example response-units-per-predictor-unit
+             * @enum {string}
+             */
+            unit: "response-units-per-predictor-unit" | "percent-per-predictor-unit" | "response-units-per-percent" | "percent-per-percent";
+            /**
+             * @description The exact effect of the slope b: lin-lin b; log-lin 100(eᵇ − 1) % per unit of x; lin-log b·ln(1.01) per 1% rise in x; log-log 100(1.01ᵇ − 1) % for a 1% rise in x.
+             * @example 0.0000812
+             */
+            value: number;
+            /**
+             * @description The usual linear approximation of value: lin-lin b (equal to value); log-lin 100b; lin-log b/100; log-log b (the elasticity).
+             * @example 0.0000812
+             */
+            approximation: number;
+            /**
+             * @description log-log only: the elasticity b (% change in y per 1% change in x). Null for the other forms.
+             * @example null
+             */
+            elasticity: number | null;
+            /** @description value evaluated at the two ends of the coefficient’s confidence interval (every map above is increasing in b), in the same unit as value. */
+            confidenceInterval: components["schemas"]["IntervalDto"];
+            /**
+             * @description One sentence saying how to read value for this predictor and form.
+             * @example Change in the response for a one-unit increase in ticket_size.
+             */
+            description: string;
+        };
+        OriginalScaleSummaryDto: {
+            /**
+             * @description Duan’s (1983) smearing factor S = mean of exp(residual) on the log scale (weighted mean Σ w_i e^{r_i} / Σ w_i for a weighted fit). exp(x′b)·S estimates the mean of y; exp(x′b) alone estimates its median.
+             * @example 1.0214
+             */
+            smearingFactor: number;
+            /**
+             * @description Log-likelihood of y itself: the ln-y log-likelihood minus Σ ln y_i (the Jacobian of y → ln y). Comparable with a model of untransformed y fitted to the same rows. Null for a perfect fit.
+             * @example 1342.8
+             */
+            logLikelihood: number | null;
+            /**
+             * @description AIC of y itself: −2·logLikelihood + 2k (k = p + 1, σ counted), i.e. the ln-y AIC + 2·Σ ln y_i. Null for a perfect fit.
+             * @example -2679.6
+             */
+            aic: number | null;
+            /**
+             * @description BIC of y itself: −2·logLikelihood + k·ln n, i.e. the ln-y BIC + 2·Σ ln y_i. Null for a perfect fit.
+             * @example -2669.7
+             */
+            bic: number | null;
+        };
+        ObservationResultsDto: {
+            /** @description Fitted values ŷ_i = x_i′b on the model’s scale (ln y for log-y forms). */
+            fitted: number[];
+            /** @description Residuals y_i − ŷ_i on the model’s scale, not multiplied by √w_i for a weighted fit. */
+            residuals: number[];
+            /** @description Leverage h_i: the diagonal of the hat matrix W^½X(X′WX)⁻¹X′W^½, between 0 and 1. */
+            leverage: number[];
+            /** @description Internally studentised residuals e_i / (s·√(1 − h_i)), with e_i = √w_i (y_i − ŷ_i). Null where undefined: h_i = 1 (within 1e-10) or s = 0. */
+            standardisedResiduals: (number | null)[];
+            /** @description Externally studentised residuals e_i / (s_(i)·√(1 − h_i)) with the leave-one-out s_(i)² = (RSS − e_i²/(1 − h_i)) / (n − p − 1). Null where h_i = 1, s = 0, n − p − 1 = 0 or s_(i)² is not positive. */
+            studentisedResiduals: (number | null)[];
+            /** @description Cook’s distance e_i²·h_i / (p·s²·(1 − h_i)²). Null where h_i = 1 or s = 0. */
+            cooksDistance: (number | null)[];
+            /** @description Log-y forms only: exp(ŷ_i), an estimate of the median of y_i on its original scale. */
+            fittedOriginalScaleNaive?: number[];
+            /** @description Log-y forms only: exp(ŷ_i) times Duan’s smearing factor, an estimate of the mean of y_i on its original scale. */
+            fittedOriginalScaleSmeared?: number[];
+        };
+        FitNumericsDto: {
+            /**
+             * @description householder-refined: Householder QR of the centred, power-of-two-scaled design with iterative refinement in double-double. tall-skinny: blocked tall-skinny QR, used when n·p > 2²¹ (a tall problem whose condition number exceeds 1e4 is handed to the refined solver and reported as householder-refined). straight-line: one predictor with an intercept and no weights, solved from one pass of shifted sums.
+             * @example straight-line
+             * @enum {string}
+             */
+            method: "householder-refined" | "tall-skinny" | "straight-line";
+            /**
+             * @description Frobenius-norm condition number of the working design the solver factorised (centred for an intercept model, columns scaled by powers of two). It describes the solve, not the caller’s columns: see the collinearity check for the scaled, uncentred condition number. Null on the straight-line path.
+             * @example null
+             */
+            conditionNumber: number | null;
+            /**
+             * @description Iterative-refinement steps taken for the coefficients; 0 on the straight-line and tall-skinny paths.
+             * @example 0
+             */
+            refinementSteps: number;
+        };
+        FitResultDto: {
+            /**
+             * @description Version of the engine’s numerical behaviour that produced these numbers, so stored fits can be traced.
+             * @example 1.0.0
+             */
+            engineVersion: string;
+            /**
+             * @description lin-lin: y on x. log-lin: ln y on x. lin-log: y on ln x. log-log: ln y on ln x. Natural logs; every predictor is transformed the same way.
+             * @example lin-lin
+             * @enum {string}
+             */
+            form: "lin-lin" | "log-lin" | "lin-log" | "log-log";
+            /** @description The transforms the form applied to the response and the predictors. */
+            transformations: components["schemas"]["FitTransformationsDto"];
+            /**
+             * @description Response column name.
+             * @example chargeback_rate
+             */
+            response: string;
+            /**
+             * @description Predictor column names, in design order.
+             * @example [
+             *       "ticket_size"
+             *     ]
+             */
+            predictors: string[];
+            /**
+             * @description True when the model has a constant term; it is reported first, as the coefficient "(intercept)".
+             * @example true
+             */
+            intercept: boolean;
+            /**
+             * @description Name of the weight column of a weighted fit (minimising Σ w_i (y_i − x_i′b)²); null for ordinary least squares.
+             * @example null
+             */
+            weights: string | null;
+            /**
+             * @description n: rows used in the fit.
+             * @example 200
+             */
+            observationCount: number;
+            /**
+             * @description p: coefficients estimated, the intercept included.
+             * @example 2
+             */
+            coefficientCount: number;
+            /**
+             * @description Level of every confidence interval in this result, strictly between 0 and 1.
+             * @example 0.95
+             */
+            confidenceLevel: number;
+            /** @description Coefficient table under the classical covariance s²(X′WX)⁻¹, in design order (intercept first when present). */
+            coefficients: components["schemas"]["CoefficientEstimateDto"][];
+            /** @description Analysis-of-variance table and the overall F-test. */
+            anova: components["schemas"]["AnovaTableDto"];
+            /**
+             * @description Share of variation explained, on the model’s scale. Centred 1 − RSS/Σ w_i (y_i − ȳ_w)² for models with an intercept; uncentred 1 − RSS/Σ w_i y_i² without one, as the NIST StRD suite certifies for its no-intercept datasets (see rSquaredDefinition). Computed as (total − RSS)/total in double-double and kept within [0, 1].
+             * @example 0.3364
+             */
+            rSquared: number;
+            /**
+             * @description 1 − (RSS/total sum of squares)·(total df)/(n − p), total df being n − 1 with an intercept and n without one. Can be negative.
+             * @example 0.333
+             */
+            adjustedRSquared: number;
+            /**
+             * @description Which total rSquared is measured against: centred (model with an intercept) or uncentred (model without one).
+             * @example centred
+             * @enum {string}
+             */
+            rSquaredDefinition: "centred" | "uncentred";
+            /**
+             * @description s = √(RSS/(n − p)), the estimated error standard deviation in units of the response on the model’s scale (ln-y units for log-y forms).
+             * @example 0.00144
+             */
+            residualStandardError: number;
+            /**
+             * @description n − p.
+             * @example 198
+             */
+            residualDegreesOfFreedom: number;
+            /** @description Gaussian log-likelihood, AIC and BIC on the model’s scale, with σ counted as a parameter. */
+            informationCriteria: components["schemas"]["InformationCriteriaDto"];
+            /**
+             * @description True when RSS is exactly 0. Then every standard error is 0 and tStatistic, pValue, fStatistic, fPValue, the log-likelihood, AIC and BIC are null.
+             * @example false
+             */
+            perfectFit: boolean;
+            /** @description One entry per predictor (the intercept excluded), in predictor order: its slope read in the form’s units. */
+            effects: components["schemas"]["CoefficientEffectDto"][];
+            /** @description Log-y forms (log-lin, log-log) only: Duan’s smearing factor and the Jacobian-adjusted criteria of y. Null otherwise. */
+            originalScale: components["schemas"]["OriginalScaleSummaryDto"] | null;
+            /** @description Present only when per-observation results were asked for: one value per row, in row order. */
+            observations?: components["schemas"]["ObservationResultsDto"];
+            /** @description Which solver ran and how well conditioned its working problem was. */
+            numerics: components["schemas"]["FitNumericsDto"];
+        };
+        CovarianceDescriptionDto: {
+            /**
+             * @description With C = (X′WX)⁻¹ and scores u_i = w_i e_i x_i: classical s²C, s² = RSS/(n − p). hc0: C[Σ u_i u_i′]C (White 1980). hc1: hc0 × n/(n − p). hc2: each u_i u_i′ divided by 1 − h_i. hc3: divided by (1 − h_i)² (MacKinnon & White 1985). newey-west: C S C with S the Bartlett-weighted sum of score autocovariances up to lag L, rows in time order (Newey & West 1987). cluster: CR1, C[Σ_g s_g s_g′]C × G/(G − 1)·(n − 1)/(n − p) with s_g the summed scores of group g.
+             * @example hc1
+             * @enum {string}
+             */
+            type: "classical" | "hc0" | "hc1" | "hc2" | "hc3" | "newey-west" | "cluster";
+            /**
+             * @description newey-west only: the lag L (weights 1 − l/(L + 1), l = 1…L). Automatic rule: L = floor(4·(n/100)^(2/9)) (Newey & West 1994), at most n − 1. Null for other types.
+             * @example null
+             */
+            lag: number | null;
+            /**
+             * @description newey-west only: whether L was given (fixed) or chosen by the automatic rule. Null for other types.
+             * @example null
+             * @enum {string|null}
+             */
+            lagRule: "fixed" | "automatic" | null;
+            /**
+             * @description newey-west only: the lag-weight kernel (Bartlett). Null for other types.
+             * @example null
+             * @enum {string|null}
+             */
+            kernel: "bartlett" | null;
+            /**
+             * @description cluster only: G, the number of distinct group labels (at least 2). Null for other types.
+             * @example null
+             */
+            clusterCount: number | null;
+            /**
+             * @description Factor the covariance was multiplied by: n/(n − p) for hc1, and for newey-west when the small-sample correction was requested (none by default); G/(G − 1)·(n − 1)/(n − p) for cluster; 1 otherwise.
+             * @example 1.0101
+             */
+            smallSampleFactor: number;
+            /**
+             * @description Degrees of freedom of every t and F reference distribution: n − p, or G − 1 for cluster.
+             * @example 198
+             */
+            inferenceDegreesOfFreedom: number;
+        };
+        CoefficientRowDto: {
+            /**
+             * @description Coefficient name: "(intercept)" for the constant (first when present), otherwise the predictor column name.
+             * @example ticket_size
+             */
+            term: string;
+            /**
+             * @description Least-squares coefficient b_j on the model’s scale.
+             * @example 0.0000812
+             */
+            estimate: number;
+            /**
+             * @description √V_jj under the covariance described in `covariance`, in the units of the estimate.
+             * @example 0.0000093
+             */
+            standardError: number;
+            /**
+             * @description b_j / standardError; null when the standard error is 0 (an exact fit).
+             * @example 8.73
+             */
+            tStatistic: number | null;
+            /**
+             * @description Two-sided P(|T| ≥ |t|), T ~ Student’s t on inferenceDegreesOfFreedom; null when tStatistic is null.
+             * @example 1.2e-15
+             */
+            pValue: number | null;
+            /** @description b_j ∓ t_{df,(1+level)/2}·standardError, df = inferenceDegreesOfFreedom, at confidenceLevel. */
+            confidenceInterval: components["schemas"]["IntervalDto"];
+        };
+        WaldTestDto: {
+            /**
+             * @description Terms tested jointly against 0: every slope, or every coefficient when the model has no intercept.
+             * @example [
+             *       "ticket_size"
+             *     ]
+             */
+            terms: string[];
+            /**
+             * @description F = (Rb)′(RVR′)⁻¹(Rb)/q, R selecting the q tested coefficients. With the classical covariance this equals the analysis-of-variance F.
+             * @example 76.2
+             */
+            statistic: number;
+            /**
+             * @description q, the number of tested terms.
+             * @example 1
+             */
+            numeratorDegreesOfFreedom: number;
+            /**
+             * @description The covariance’s inference degrees of freedom: n − p, or G − 1 for cluster.
+             * @example 198
+             */
+            denominatorDegreesOfFreedom: number;
+            /**
+             * @description Upper-tail probability of statistic under F(q, denominator df).
+             * @example 1.2e-15
+             */
+            pValue: number;
+        };
+        InferenceResultDto: {
+            /** @description The coefficient covariance the table and test use. */
+            covariance: components["schemas"]["CovarianceDescriptionDto"];
+            /**
+             * @description Level of every confidence interval, strictly between 0 and 1.
+             * @example 0.95
+             */
+            confidenceLevel: number;
+            /** @description One row per coefficient, in design order (intercept first when present). */
+            coefficients: components["schemas"]["CoefficientRowDto"][];
+            /** @description Wald F-test that every slope is 0. Null when RVR′ is not positive definite, for example a cluster covariance with more tested terms than G − 1, or a perfect fit. */
+            waldTest: components["schemas"]["WaldTestDto"] | null;
+            /**
+             * @description n: rows used in the fit.
+             * @example 200
+             */
+            observationCount: number;
+            /**
+             * @description n − p, whatever the covariance (the cluster covariance’s G − 1 is covariance.inferenceDegreesOfFreedom).
+             * @example 198
+             */
+            residualDegreesOfFreedom: number;
+            /**
+             * @description Level at which every check’s flagged is judged, strictly between 0 and 1 (default 0.05).
+             * @example 0.05
+             */
+            significanceLevel: number;
+        };
+        ResetCheckDto: {
+            /**
+             * @description The check was computed for this model.
+             * @example computed
+             * @enum {string}
+             */
+            status: "computed";
+            /**
+             * @description Level at which flagged is judged: the request’s significanceLevel (default 0.05).
+             * @example 0.05
+             */
+            significanceLevel: number;
+            /**
+             * @description True when pValue < significanceLevel: the assumption the check guards is rejected at that level.
+             * @example false
+             */
+            flagged: boolean;
+            /**
+             * @description F form of Ramsey’s (1969) RESET: the model is refitted with powers of its fitted values (on the model’s scale, with the same weights for a weighted fit) added as regressors.
+             * @example fitted-powers-f-test
+             * @enum {string}
+             */
+            variant: "fitted-powers-f-test";
+            /**
+             * @description Powers of ŷ kept in the augmented regression: 2 up to resetMaxPower (default 3), less any power exactly collinear with the design.
+             * @example [
+             *       2,
+             *       3
+             *     ]
+             */
+            powers: number[];
+            /**
+             * @description F = ((RSS_r − RSS_a)/q) / (RSS_a/(n − p − q)): RSS_r of the model, RSS_a of the model with the powers added, q powers kept.
+             * @example 1.42
+             */
+            statistic: number;
+            /**
+             * @description Always fisher-f for this check.
+             * @example fisher-f
+             * @enum {string}
+             */
+            distribution: "fisher-f";
+            /**
+             * @description q, the number of powers kept (numerator degrees of freedom).
+             * @example 2
+             */
+            degreesOfFreedom: number;
+            /**
+             * @description n − p − q (denominator degrees of freedom).
+             * @example 196
+             */
+            denominatorDegreesOfFreedom: number;
+            /**
+             * @description Upper-tail probability of statistic under F(q, n − p − q).
+             * @example 0.244
+             */
+            pValue: number;
+        };
+        BreuschPaganCheckDto: {
+            /**
+             * @description The check was computed for this model.
+             * @example computed
+             * @enum {string}
+             */
+            status: "computed";
+            /**
+             * @description Level at which flagged is judged: the request’s significanceLevel (default 0.05).
+             * @example 0.05
+             */
+            significanceLevel: number;
+            /**
+             * @description True when pValue < significanceLevel: the assumption the check guards is rejected at that level.
+             * @example false
+             */
+            flagged: boolean;
+            /**
+             * @description studentised (default): Koenker’s (1981) version, robust to non-normal errors. original: Breusch & Pagan (1979), valid under normal errors only.
+             * @example studentised
+             * @enum {string}
+             */
+            variant: "studentised" | "original";
+            /**
+             * @description Auxiliary regressors kept, the constant the test adds excluded: the model’s non-constant regressors. For a weighted fit every whitened column √w_i x_i, the intercept’s named "sqrt(weight)". Columns exactly collinear with others are dropped.
+             * @example [
+             *       "ticket_size"
+             *     ]
+             */
+            regressors: string[];
+            /**
+             * @description studentised: Koenker’s studentised LM = n·R², R² the centred R² of e_i² regressed on a constant and the regressors. original: LM = ESS/2, ESS the explained sum of squares of g_i = e_i² / (Σ e_j²/n) on the same regressors. For a weighted fit the whitened residuals √w_i e_i are used.
+             * @example 3.18
+             */
+            statistic: number;
+            /**
+             * @description Always chi-square for this check.
+             * @example chi-square
+             * @enum {string}
+             */
+            distribution: "chi-square";
+            /**
+             * @description Number of auxiliary regressors kept (p − 1 for an unweighted model with an intercept).
+             * @example 1
+             */
+            degreesOfFreedom: number;
+            /**
+             * @description Always null (chi-square reference).
+             * @example null
+             */
+            denominatorDegreesOfFreedom: number | null;
+            /**
+             * @description Upper-tail probability of statistic under chi-square(degreesOfFreedom).
+             * @example 0.0745
+             */
+            pValue: number;
+        };
+        WhiteCheckDto: {
+            /**
+             * @description The check was computed for this model.
+             * @example computed
+             * @enum {string}
+             */
+            status: "computed";
+            /**
+             * @description Level at which flagged is judged: the request’s significanceLevel (default 0.05).
+             * @example 0.05
+             */
+            significanceLevel: number;
+            /**
+             * @description True when pValue < significanceLevel: the assumption the check guards is rejected at that level.
+             * @example false
+             */
+            flagged: boolean;
+            /**
+             * @description Full White (1980) test: the auxiliary regression uses the regressors, their squares and all pairwise cross-products.
+             * @example squares-and-cross-products
+             * @enum {string}
+             */
+            variant: "squares-and-cross-products";
+            /**
+             * @description Auxiliary regressors kept, the constant excluded: the non-constant regressors, then squares ("x^2") and cross-products ("x*z"). Repeated or exactly collinear columns (a dummy’s square, for example) are dropped.
+             * @example [
+             *       "ticket_size",
+             *       "ticket_size^2"
+             *     ]
+             */
+            regressors: string[];
+            /**
+             * @description LM = n·R², R² the centred R² of e_i² regressed on a constant and the regressors listed. For a weighted fit the whitened residuals √w_i e_i are used.
+             * @example 4.07
+             */
+            statistic: number;
+            /**
+             * @description Always chi-square for this check.
+             * @example chi-square
+             * @enum {string}
+             */
+            distribution: "chi-square";
+            /**
+             * @description Number of auxiliary regressors kept, the constant excluded.
+             * @example 2
+             */
+            degreesOfFreedom: number;
+            /**
+             * @description Always null (chi-square reference).
+             * @example null
+             */
+            denominatorDegreesOfFreedom: number | null;
+            /**
+             * @description Upper-tail probability of statistic under chi-square(degreesOfFreedom).
+             * @example 0.131
+             */
+            pValue: number;
+        };
+        DurbinWatsonCheckDto: {
+            /**
+             * @description The check was computed for this model.
+             * @example computed
+             * @enum {string}
+             */
+            status: "computed";
+            /**
+             * @description Level at which flagged is judged: the request’s significanceLevel (default 0.05).
+             * @example 0.05
+             */
+            significanceLevel: number;
+            /**
+             * @description True when pValue < significanceLevel: the assumption the check guards is rejected at that level.
+             * @example false
+             */
+            flagged: boolean;
+            /**
+             * @description p-value from the beta approximation of Durbin & Watson (1951), fitted to the exact null mean and variance of d given the design (Durbin & Watson 1950); not the bounds test, so never inconclusive.
+             * @example beta-approximation-exact-moments
+             * @enum {string}
+             */
+            variant: "beta-approximation-exact-moments";
+            /**
+             * @description Alternative tested: positive (default) uses P(d ≤ d_obs); negative uses P(d ≥ d_obs); two-sided twice the smaller tail, capped at 1.
+             * @example positive
+             * @enum {string}
+             */
+            alternative: "positive" | "negative" | "two-sided";
+            /**
+             * @description Exact mean of d with no serial correlation, given the design: P/ν, P = tr(MA), M = I − X(X′X)⁻¹X′, A = D′D (first differences), ν = n − p.
+             * @example 2.0098
+             */
+            nullMean: number;
+            /**
+             * @description Exact variance of d with no serial correlation, given the design: 2(Q − P²/ν)/(ν(ν + 2)), Q = tr((MA)²).
+             * @example 0.0197
+             */
+            nullVariance: number;
+            /**
+             * @description d = Σ_{t=2..n} (e_t − e_{t−1})² / Σ_{t=1..n} e_t², rows taken in time order; between 0 and 4, near 2 without serial correlation. For a weighted fit the whitened residuals √w_i e_i are used.
+             * @example 1.87
+             */
+            statistic: number;
+            /**
+             * @description Always beta-approximation: d/4 is referred to a beta distribution.
+             * @example beta-approximation
+             * @enum {string}
+             */
+            distribution: "beta-approximation";
+            /**
+             * @description Always null: the beta approximation has no degrees of freedom.
+             * @example null
+             */
+            degreesOfFreedom: number | null;
+            /**
+             * @description Always null.
+             * @example null
+             */
+            denominatorDegreesOfFreedom: number | null;
+            /**
+             * @description Tail probability of d (per alternative) with d/4 ~ Beta(a, b), a and b chosen so that d has mean nullMean and variance nullVariance.
+             * @example 0.176
+             */
+            pValue: number;
+        };
+        BreuschGodfreyCheckDto: {
+            /**
+             * @description The check was computed for this model.
+             * @example computed
+             * @enum {string}
+             */
+            status: "computed";
+            /**
+             * @description Level at which flagged is judged: the request’s significanceLevel (default 0.05).
+             * @example 0.05
+             */
+            significanceLevel: number;
+            /**
+             * @description True when pValue < significanceLevel: the assumption the check guards is rejected at that level.
+             * @example false
+             */
+            flagged: boolean;
+            /**
+             * @description lm (default): the n·R² form, chi-square reference. f: the F form.
+             * @example lm
+             * @enum {string}
+             */
+            variant: "lm" | "f";
+            /**
+             * @description Highest residual lag L asked for (default 1).
+             * @example 1
+             */
+            lag: number;
+            /**
+             * @description From regressing e_t on the model’s regressors and e_{t−1}, …, e_{t−L}, lagged residuals before the first row set to 0 so all n rows are used (RSS_aux its residual sum of squares, L′ the lags kept). lm: n·(1 − RSS_aux/Σ e_t²), which is n·R² for a model with an intercept. f: ((Σ e_t² − RSS_aux)/L′) / (RSS_aux/(n − p − L′)). For a weighted fit the whitened residuals √w_i e_i are used.
+             * @example 0.61
+             */
+            statistic: number;
+            /**
+             * @description chi-square for variant lm, fisher-f for variant f.
+             * @example chi-square
+             * @enum {string}
+             */
+            distribution: "chi-square" | "fisher-f";
+            /**
+             * @description L′, the lagged residuals kept (equal to lag unless one is exactly collinear with the regressors).
+             * @example 1
+             */
+            degreesOfFreedom: number;
+            /**
+             * @description Variant f: n − p − L′. Null for variant lm.
+             * @example null
+             */
+            denominatorDegreesOfFreedom: number | null;
+            /**
+             * @description Upper-tail probability of statistic under chi-square(L′) (lm) or F(L′, n − p − L′) (f).
+             * @example 0.435
+             */
+            pValue: number;
+        };
+        JarqueBeraCheckDto: {
+            /**
+             * @description The check was computed for this model.
+             * @example computed
+             * @enum {string}
+             */
+            status: "computed";
+            /**
+             * @description Level at which flagged is judged: the request’s significanceLevel (default 0.05).
+             * @example 0.05
+             */
+            significanceLevel: number;
+            /**
+             * @description True when pValue < significanceLevel: the assumption the check guards is rejected at that level.
+             * @example false
+             */
+            flagged: boolean;
+            /**
+             * @description Moment-based (population, 1/n) skewness and raw kurtosis of the residuals, about their mean (0 with an intercept).
+             * @example moment-skewness-kurtosis
+             * @enum {string}
+             */
+            variant: "moment-skewness-kurtosis";
+            /**
+             * @description S = m₃/m₂^{3/2} with m_k = (1/n)·Σ (e_i − ē)^k. For a weighted fit the whitened residuals √w_i e_i are used.
+             * @example 0.21
+             */
+            skewness: number;
+            /**
+             * @description K = m₄/m₂², raw kurtosis (3 for normal errors), not the excess.
+             * @example 3.34
+             */
+            kurtosis: number;
+            /**
+             * @description JB = n/6·(S² + (K − 3)²/4).
+             * @example 2.43
+             */
+            statistic: number;
+            /**
+             * @description Always chi-square for this check (asymptotic).
+             * @example chi-square
+             * @enum {string}
+             */
+            distribution: "chi-square";
+            /**
+             * @description Always 2.
+             * @example 2
+             */
+            degreesOfFreedom: number;
+            /**
+             * @description Always null (chi-square reference).
+             * @example null
+             */
+            denominatorDegreesOfFreedom: number | null;
+            /**
+             * @description Upper-tail probability of statistic under chi-square(2).
+             * @example 0.297
+             */
+            pValue: number;
+        };
+        VarianceInflationDto: {
+            /**
+             * @description Predictor column name.
+             * @example ticket_size
+             */
+            term: string;
+            /**
+             * @description R²_j: centred R² of this predictor regressed on the other non-intercept predictors plus a constant (the constant is used even for a model without an intercept; a weighted fit uses its weights). 0 when there is one predictor.
+             * @example 0.41
+             */
+            rSquared: number;
+            /**
+             * @description 1/(1 − R²_j) (Marquardt 1970); 1 when there is one predictor.
+             * @example 1.69
+             */
+            varianceInflationFactor: number;
+        };
+        CollinearityCheckDto: {
+            /**
+             * @description The check was computed for this model.
+             * @example computed
+             * @enum {string}
+             */
+            status: "computed";
+            /** @description One entry per predictor, the intercept excluded, in predictor order. */
+            varianceInflation: components["schemas"]["VarianceInflationDto"][];
+            /**
+             * @description σ_max/σ_min of the design with every column, the intercept column included, scaled to unit Euclidean length and not centred (whitened columns √w_i x_i for a weighted fit), after Belsley, Kuh & Welsch (1980). Dimensionless.
+             * @example 4.9
+             */
+            conditionNumber: number;
+            /**
+             * @description σ_max/σ_k for every singular value of the same scaled design, in decreasing order of σ_k (the first is 1, the last conditionNumber).
+             * @example [
+             *       1,
+             *       4.9
+             *     ]
+             */
+            conditionIndices: number[];
+            /**
+             * @description True when the model has an intercept, whose column of ones then takes part in the condition number.
+             * @example true
+             */
+            interceptIncluded: boolean;
+            /**
+             * @description Always true: the columns are scaled to unit length before the singular values are taken.
+             * @example true
+             * @enum {boolean}
+             */
+            columnsScaledToUnitLength: true;
+            /**
+             * @description True when any varianceInflationFactor ≥ 10 or conditionNumber ≥ 30 (common-practice thresholds; no p-value is involved).
+             * @example false
+             */
+            flagged: boolean;
+        };
+        DiagnosticNotDefinedDto: {
+            /**
+             * @description The check could not be computed for this model.
+             * @example not-defined
+             * @enum {string}
+             */
+            status: "not-defined";
+            /**
+             * @description Engine error code that stopped the check: invalid-argument (see reason) for the check’s own limits, or a solver code such as collinear-columns (an exactly singular design has no finite condition number) or too-few-observations (more auxiliary columns than rows).
+             * @example invalid-argument
+             * @enum {string}
+             */
+            code: "empty-input" | "length-mismatch" | "missing-column" | "duplicate-column" | "non-finite-value" | "too-few-observations" | "constant-column" | "constant-response" | "zero-column" | "collinear-columns" | "non-positive-log-argument" | "non-positive-weight" | "invalid-confidence-level" | "unknown-form" | "invalid-argument" | "no-form-fits";
+            /**
+             * @description The exact reason when code is invalid-argument: usually perfect-fit (the residuals are rounding noise, ‖e‖ ≤ 1e-12·‖y‖ in weighted norms) or test-not-defined (the check’s definition cannot be met for this model). Null for other codes.
+             * @example perfect-fit
+             * @enum {string|null}
+             */
+            reason: "invalid-lag" | "lag-too-large" | "too-few-clusters" | "invalid-cluster-groups" | "invalid-window" | "window-too-long" | "predictor-count-mismatch" | "unknown-diagnostic" | "unknown-covariance" | "invalid-significance-level" | "leverage-of-one" | "perfect-fit" | "test-not-defined" | null;
+            /**
+             * @description Human-readable explanation.
+             * @example The model fits every observation exactly (to within rounding), so the White test is not defined.
+             */
+            message: string;
+        };
+        DiagnosticsDto: {
+            /** @description Functional form: Ramsey’s RESET, F form with powers of the fitted values. Present only when this check was requested (all checks run by default). */
+            reset?: components["schemas"]["ResetCheckDto"] | components["schemas"]["DiagnosticNotDefinedDto"];
+            /** @description Constant error variance: Breusch-Pagan, Koenker’s studentised LM = n·R² by default or the original ESS/2. Present only when this check was requested (all checks run by default). */
+            breuschPagan?: components["schemas"]["BreuschPaganCheckDto"] | components["schemas"]["DiagnosticNotDefinedDto"];
+            /** @description Constant error variance: White’s LM = n·R² with squares and cross-products. Present only when this check was requested (all checks run by default). */
+            white?: components["schemas"]["WhiteCheckDto"] | components["schemas"]["DiagnosticNotDefinedDto"];
+            /** @description First-order serial correlation: Durbin-Watson d with a beta-approximation p-value. Present only when this check was requested (all checks run by default). */
+            durbinWatson?: components["schemas"]["DurbinWatsonCheckDto"] | components["schemas"]["DiagnosticNotDefinedDto"];
+            /** @description Serial correlation up to a lag: Breusch-Godfrey, n·R² (zero-filled lags) or F form. Present only when this check was requested (all checks run by default). */
+            breuschGodfrey?: components["schemas"]["BreuschGodfreyCheckDto"] | components["schemas"]["DiagnosticNotDefinedDto"];
+            /** @description Normal errors: Jarque-Bera from moment-based skewness and kurtosis. Present only when this check was requested (all checks run by default). */
+            jarqueBera?: components["schemas"]["JarqueBeraCheckDto"] | components["schemas"]["DiagnosticNotDefinedDto"];
+            /** @description Collinearity: variance inflation factors and the scaled condition number. Present only when this check was requested (all checks run by default). */
+            collinearity?: components["schemas"]["CollinearityCheckDto"] | components["schemas"]["DiagnosticNotDefinedDto"];
+        };
+        FitResponseDto: {
+            /**
+             * Format: uuid
+             * @description Id of the stored result (GET /v1/results/{resultId}).
+             */
+            id: string;
+            /** @enum {string} */
+            kind: "fit" | "form-comparison" | "prediction" | "batch-fit" | "rolling-fit";
+            /** Format: date-time */
+            createdAt: string;
+            /**
+             * @description Version of the regression engine that computed the result.
+             * @example 1.0.0
+             */
+            engineVersion: string;
+            /** @description SHA-256 over the canonical specification and the exact values the engine received, column by column: equal hashes mean the same model on the same numbers. */
+            inputHash: string;
+            /** @description The request id of the call that computed it. */
+            requestId: string;
+            /** @description The request without its data columns. */
+            specification: {
+                [key: string]: unknown;
+            };
+            /** @description A plain caution: estimates under the stated assumptions, not financial advice. */
+            caution: string;
+            usage: components["schemas"]["UsageChargeDto"];
+            source: components["schemas"]["DataSourceDescriptionDto"];
+            rows: components["schemas"]["RowAccountingDto"];
+            /** @description The fit with classical inference, ANOVA and goodness of fit. */
+            fit: components["schemas"]["FitResultDto"];
+            /** @description Coefficients and the Wald test under the requested covariance. */
+            inference: components["schemas"]["InferenceResultDto"];
+            /** @description The requested assumption checks (empty with diagnostics = "none"). */
+            diagnostics: components["schemas"]["DiagnosticsDto"];
+        };
+        ComparedModelDto: {
+            /**
+             * @description Response (dependent) column.
+             * @example chargeback_rate
+             */
+            response: string;
+            /**
+             * @description Predictor columns, in order.
+             * @example [
+             *       "ticket_size"
+             *     ]
+             */
+            predictors: string[];
+            /**
+             * @description Estimate an intercept.
+             * @default true
+             */
+            intercept?: boolean;
+            /** @description Column of positive weights for weighted least squares (minimises Σ wᵢ eᵢ²). */
+            weights?: string;
+        };
+        CompareFormsDto: {
+            data: components["schemas"]["DataSourceDto"];
+            /**
+             * @description Level of confidence and prediction intervals, strictly between 0 and 1.
+             * @default 0.95
+             */
+            confidenceLevel?: number;
+            /**
+             * @description reject: any missing value in the model’s columns is an error listing the rows (0-based). drop-rows: rows with a missing value in any used column are left out (listwise); the answer lists them.
+             * @default reject
+             * @enum {string}
+             */
+            missingValues?: "drop-rows" | "reject";
+            model: components["schemas"]["ComparedModelDto"];
+            /** @description Forms to compare (default: all four). */
+            forms?: ("lin-lin" | "log-lin" | "lin-log" | "log-log")[];
+        };
+        FormRanksDto: {
+            /**
+             * @description Rank by aic, lowest first; a null aic (perfect fit) ranks first.
+             * @example 1
+             */
+            aic: number;
+            /**
+             * @description Rank by bic, lowest first; a null bic (perfect fit) ranks first.
+             * @example 1
+             */
+            bic: number;
+            /**
+             * @description Rank by rSquared, highest first.
+             * @example 2
+             */
+            rSquared: number;
+            /**
+             * @description Rank by residualStandardError, lowest first.
+             * @example 1
+             */
+            residualStandardError: number;
+        };
+        FormCriteriaDto: {
+            /**
+             * @description The functional form.
+             * @example log-lin
+             * @enum {string}
+             */
+            form: "lin-lin" | "log-lin" | "lin-log" | "log-log";
+            /**
+             * @description Overall rank, 1 = best: the AIC rank (ties keep the request order of forms).
+             * @example 1
+             */
+            rank: number;
+            /**
+             * @description Gaussian log-likelihood of y itself: for ln-y forms the Jacobian-adjusted value (ln-y log-likelihood − Σ ln y_i), otherwise the fit’s own. Null for a perfect fit.
+             * @example 1342.8
+             */
+            logLikelihood: number | null;
+            /**
+             * @description −2·logLikelihood + 2k on the scale of y, k = p + 1 (σ counted). Null for a perfect fit.
+             * @example -2679.6
+             */
+            aic: number | null;
+            /**
+             * @description −2·logLikelihood + k·ln n on the scale of y, k = p + 1. Null for a perfect fit.
+             * @example -2669.7
+             */
+            bic: number | null;
+            /**
+             * @description 1 − Σ w_i (y_i − ŷ_i)² / total on the scale of y, ŷ back-transformed with Duan’s smearing for ln-y forms; total centred with an intercept, uncentred without one. Can be negative for a back-transformed fit.
+             * @example 0.352
+             */
+            rSquared: number;
+            /**
+             * @description √(Σ w_i (y_i − ŷ_i)² / (n − p)) on the scale of y, with the same ŷ, in units of the response.
+             * @example 0.00141
+             */
+            residualStandardError: number;
+            /** @description Rank on each criterion among the fitted forms. */
+            ranks: components["schemas"]["FormRanksDto"];
+        };
+        SkippedFormDto: {
+            /**
+             * @description The functional form.
+             * @example log-log
+             * @enum {string}
+             */
+            form: "lin-lin" | "log-lin" | "lin-log" | "log-log";
+            /**
+             * @description Engine error code that stopped it, for example non-positive-log-argument (a log of a value ≤ 0) or collinear-columns (predictors that become collinear after taking logs).
+             * @example non-positive-log-argument
+             * @enum {string}
+             */
+            code: "empty-input" | "length-mismatch" | "missing-column" | "duplicate-column" | "non-finite-value" | "too-few-observations" | "constant-column" | "constant-response" | "zero-column" | "collinear-columns" | "non-positive-log-argument" | "non-positive-weight" | "invalid-confidence-level" | "unknown-form" | "invalid-argument" | "no-form-fits";
+            /**
+             * @description Human-readable explanation.
+             * @example Column "ticket_size" needs a natural log for this form, but row 17 (0-based) holds 0, which is not positive.
+             */
+            message: string;
+            /**
+             * @description Offending column, when the error names one.
+             * @example ticket_size
+             */
+            column?: string;
+            /**
+             * @description Offending row (0-based), when the error names one.
+             * @example 17
+             */
+            row?: number;
+        };
+        FormComparisonResultDto: {
+            /**
+             * @description The criterion behind rank: AIC on the scale of y, lower is better.
+             * @example aic
+             * @enum {string}
+             */
+            rankedBy: "aic";
+            /** @description One entry per fitted form, best first. */
+            criteria: components["schemas"]["FormCriteriaDto"][];
+            /** @description Each fitted form’s full result (on its own model scale), keyed by form name (lin-lin, log-lin, lin-log, log-log). */
+            fits: {
+                [key: string]: components["schemas"]["FitResultDto"];
+            };
+            /** @description Requested forms that could not be fitted, with the error that stopped each. */
+            skipped: components["schemas"]["SkippedFormDto"][];
+        };
+        FormComparisonResponseDto: {
+            /**
+             * Format: uuid
+             * @description Id of the stored result (GET /v1/results/{resultId}).
+             */
+            id: string;
+            /** @enum {string} */
+            kind: "fit" | "form-comparison" | "prediction" | "batch-fit" | "rolling-fit";
+            /** Format: date-time */
+            createdAt: string;
+            /**
+             * @description Version of the regression engine that computed the result.
+             * @example 1.0.0
+             */
+            engineVersion: string;
+            /** @description SHA-256 over the canonical specification and the exact values the engine received, column by column: equal hashes mean the same model on the same numbers. */
+            inputHash: string;
+            /** @description The request id of the call that computed it. */
+            requestId: string;
+            /** @description The request without its data columns. */
+            specification: {
+                [key: string]: unknown;
+            };
+            /** @description A plain caution: estimates under the stated assumptions, not financial advice. */
+            caution: string;
+            usage: components["schemas"]["UsageChargeDto"];
+            source: components["schemas"]["DataSourceDescriptionDto"];
+            rows: components["schemas"]["RowAccountingDto"];
+            comparison: components["schemas"]["FormComparisonResultDto"];
+        };
+        CreatePredictionDto: {
+            /**
+             * Format: uuid
+             * @description A stored fit to predict from (instead of `data` + `model`).
+             */
+            fitId?: string;
+            /** @description Data to fit first (with `model`), when no `fitId` is given. */
+            data?: components["schemas"]["DataSourceDto"];
+            model?: components["schemas"]["ModelSpecDto"];
+            /** @description With data + model: the covariance behind the intervals (default classical). */
+            covariance?: components["schemas"]["CovarianceChoiceDto"];
+            /**
+             * @description Points to predict at: one list of predictor values per point, in the order of the model’s predictors, on the original scale (the model’s form applies any logs).
+             * @example [
+             *       [
+             *         25
+             *       ],
+             *       [
+             *         60
+             *       ]
+             *     ]
+             */
+            points: number[][];
+            /**
+             * @description Interval level, strictly between 0 and 1 (for a stored fit, defaults to the fit’s level).
+             * @default 0.95
+             */
+            confidenceLevel?: number;
+            /**
+             * @default reject
+             * @enum {string}
+             */
+            missingValues?: "drop-rows" | "reject";
+        };
+        PredictionModelScaleDto: {
+            /**
+             * @description ŷ₀ = x₀′b, x₀ transformed as the form asks (ln x for lin-log and log-log).
+             * @example 0.00609
+             */
+            estimate: number;
+            /**
+             * @description √(x₀′V x₀): standard error of the mean response at the point, V the covariance described in `covariance`.
+             * @example 0.000134
+             */
+            standardErrorOfMean: number;
+            /**
+             * @description √(s² + x₀′V x₀), s² = RSS/(n − p): standard error for one new observation of weight 1.
+             * @example 0.00145
+             */
+            standardErrorOfPrediction: number;
+            /** @description estimate ∓ t_{df,(1+level)/2}·standardErrorOfMean: interval for the mean response. */
+            confidenceInterval: components["schemas"]["IntervalDto"];
+            /** @description estimate ∓ t_{df,(1+level)/2}·standardErrorOfPrediction: interval for one new observation. */
+            predictionInterval: components["schemas"]["IntervalDto"];
+        };
+        PredictionOriginalScaleDto: {
+            /**
+             * @description exp(ŷ₀): the conditional median of y.
+             * @example 41.7
+             */
+            estimate: number;
+            /**
+             * @description exp(ŷ₀ + s²/2): the log-normal conditional mean of y.
+             * @example 42.3
+             */
+            meanEstimate: number;
+            /**
+             * @description exp(ŷ₀)·S with Duan’s (1983) smearing factor S = mean of exp(residual) (weighted for a weighted fit): a distribution-free estimate of the mean of y. Null only when the model supplied no smearing factor.
+             * @example 42.5
+             */
+            smearedMeanEstimate: number | null;
+            /** @description exp of the model-scale confidence interval ends: an interval for the median of y. */
+            confidenceInterval: components["schemas"]["IntervalDto"];
+            /** @description exp of the model-scale prediction interval ends: an exact prediction interval for a new y (exp is increasing). */
+            predictionInterval: components["schemas"]["IntervalDto"];
+        };
+        PredictionDto: {
+            /**
+             * @description The point as given, on the original scale, keyed by predictor name.
+             * @example {
+             *       "ticket_size": 48.5
+             *     }
+             */
+            point: {
+                [key: string]: number;
+            };
+            /** @description Estimate, standard errors and intervals on the model’s scale. */
+            modelScale: components["schemas"]["PredictionModelScaleDto"];
+            /** @description Log-y forms (log-lin, log-log) only: the same prediction on the scale of y. Null for the other forms. */
+            originalScale: components["schemas"]["PredictionOriginalScaleDto"] | null;
+        };
+        PredictionResultDto: {
+            /**
+             * @description Level of every interval, strictly between 0 and 1.
+             * @example 0.95
+             */
+            confidenceLevel: number;
+            /**
+             * @description lin-lin: y on x. log-lin: ln y on x. lin-log: y on ln x. log-log: ln y on ln x. Natural logs; every predictor is transformed the same way.
+             * @example lin-lin
+             * @enum {string}
+             */
+            form: "lin-lin" | "log-lin" | "lin-log" | "log-log";
+            /**
+             * @description Degrees of freedom of the t quantile in every interval: the covariance’s inference degrees of freedom (n − p, or G − 1 for cluster).
+             * @example 198
+             */
+            degreesOfFreedom: number;
+            /** @description One entry per requested point, in request order. */
+            predictions: components["schemas"]["PredictionDto"][];
+        };
+        PredictionResponseDto: {
+            /**
+             * Format: uuid
+             * @description Id of the stored result (GET /v1/results/{resultId}).
+             */
+            id: string;
+            /** @enum {string} */
+            kind: "fit" | "form-comparison" | "prediction" | "batch-fit" | "rolling-fit";
+            /** Format: date-time */
+            createdAt: string;
+            /**
+             * @description Version of the regression engine that computed the result.
+             * @example 1.0.0
+             */
+            engineVersion: string;
+            /** @description SHA-256 over the canonical specification and the exact values the engine received, column by column: equal hashes mean the same model on the same numbers. */
+            inputHash: string;
+            /** @description The request id of the call that computed it. */
+            requestId: string;
+            /** @description The request without its data columns. */
+            specification: {
+                [key: string]: unknown;
+            };
+            /** @description A plain caution: estimates under the stated assumptions, not financial advice. */
+            caution: string;
+            usage: components["schemas"]["UsageChargeDto"];
+            source: components["schemas"]["DataSourceDescriptionDto"];
+            /** @description Absent for predictions from a stored fit. */
+            rows?: components["schemas"]["RowAccountingDto"];
+            /** @description The covariance behind the intervals. */
+            covariance: components["schemas"]["CovarianceDescriptionDto"];
+            prediction: components["schemas"]["PredictionResultDto"];
+        };
+        CreateBatchFitDto: {
+            data: components["schemas"]["DataSourceDto"];
+            /**
+             * @description Level of confidence and prediction intervals, strictly between 0 and 1.
+             * @default 0.95
+             */
+            confidenceLevel?: number;
+            /**
+             * @description reject: any missing value in the model’s columns is an error listing the rows (0-based). drop-rows: rows with a missing value in any used column are left out (listwise); the answer lists them.
+             * @default reject
+             * @enum {string}
+             */
+            missingValues?: "drop-rows" | "reject";
+            /**
+             * @description Response columns, each fitted against the shared predictors.
+             * @example [
+             *       "fund_a",
+             *       "fund_b"
+             *     ]
+             */
+            responses: string[];
+            /**
+             * @description Shared predictor columns.
+             * @example [
+             *       "benchmark"
+             *     ]
+             */
+            predictors: string[];
+            /**
+             * @default lin-lin
+             * @enum {string}
+             */
+            form?: "lin-lin" | "log-lin" | "lin-log" | "log-log";
+            /** @default true */
+            intercept?: boolean;
+        };
+        BatchResponseFitDto: {
+            /**
+             * @description Response column name.
+             * @example chargeback_rate_visa
+             */
+            response: string;
+            /**
+             * @description The response was fitted.
+             * @example fitted
+             * @enum {string}
+             */
+            status: "fitted";
+            /** @description Classical coefficient table: covariance s²(X′X)⁻¹, s² = RSS/(n − p), t on n − p degrees of freedom; in `terms` order. */
+            coefficients: components["schemas"]["CoefficientRowDto"][];
+            /**
+             * @description RSS = Σ (y_i − ŷ_i)² on the model’s scale.
+             * @example 0.000398
+             */
+            residualSumOfSquares: number;
+            /**
+             * @description s = √(RSS/(n − p)), in units of the response on the model’s scale.
+             * @example 0.00142
+             */
+            residualStandardError: number;
+            /**
+             * @description 1 − RSS/total: total centred Σ (y − ȳ)² with an intercept, uncentred Σ y² without one.
+             * @example 0.351
+             */
+            rSquared: number;
+            /**
+             * @description 1 − (1 − rSquared)·(n − 1)/(n − p) with an intercept, 1 − (1 − rSquared)·n/(n − p) without one. Can be negative.
+             * @example 0.3477
+             */
+            adjustedRSquared: number;
+            /** @description F-test that every slope (every coefficient without an intercept) is 0 under the classical covariance; equal to the analysis-of-variance F. Null when that covariance is not positive definite (a perfect fit). */
+            fTest: components["schemas"]["WaldTestDto"] | null;
+        };
+        BatchResponseFailureDto: {
+            /**
+             * @description Response column name.
+             * @example chargeback_rate_amex
+             */
+            response: string;
+            /**
+             * @description The response could not be fitted.
+             * @example failed
+             * @enum {string}
+             */
+            status: "failed";
+            /**
+             * @description Engine error code about this response alone: missing-column, length-mismatch, non-finite-value, non-positive-log-argument (log-y forms) or constant-response.
+             * @example constant-response
+             * @enum {string}
+             */
+            code: "empty-input" | "length-mismatch" | "missing-column" | "duplicate-column" | "non-finite-value" | "too-few-observations" | "constant-column" | "constant-response" | "zero-column" | "collinear-columns" | "non-positive-log-argument" | "non-positive-weight" | "invalid-confidence-level" | "unknown-form" | "invalid-argument" | "no-form-fits";
+            /**
+             * @description Human-readable explanation.
+             * @example Response "chargeback_rate_amex" does not vary, so R^2 and the F-test are not defined.
+             */
+            message: string;
+            /**
+             * @description Offending row (0-based) when the problem is one value; null otherwise.
+             * @example null
+             */
+            row: number | null;
+        };
+        BatchFitResultDto: {
+            /**
+             * @description lin-lin: y on x. log-lin: ln y on x. lin-log: y on ln x. log-log: ln y on ln x. Natural logs; every predictor is transformed the same way.
+             * @example lin-lin
+             * @enum {string}
+             */
+            form: "lin-lin" | "log-lin" | "lin-log" | "log-log";
+            /**
+             * @description n: rows, shared by every response.
+             * @example 200
+             */
+            observationCount: number;
+            /**
+             * @description p: coefficients per response, the intercept included.
+             * @example 2
+             */
+            coefficientCount: number;
+            /**
+             * @description n − p.
+             * @example 198
+             */
+            residualDegreesOfFreedom: number;
+            /**
+             * @description Level of every confidence interval, strictly between 0 and 1.
+             * @example 0.95
+             */
+            confidenceLevel: number;
+            /**
+             * @description Coefficient names in design order, "(intercept)" first when present; every coefficient table follows it.
+             * @example [
+             *       "(intercept)",
+             *       "ticket_size"
+             *     ]
+             */
+            terms: string[];
+            /** @description One entry per response, in request order; status fitted or failed tells them apart. */
+            fits: (components["schemas"]["BatchResponseFitDto"] | components["schemas"]["BatchResponseFailureDto"])[];
+        };
+        BatchFitResponseDto: {
+            /**
+             * Format: uuid
+             * @description Id of the stored result (GET /v1/results/{resultId}).
+             */
+            id: string;
+            /** @enum {string} */
+            kind: "fit" | "form-comparison" | "prediction" | "batch-fit" | "rolling-fit";
+            /** Format: date-time */
+            createdAt: string;
+            /**
+             * @description Version of the regression engine that computed the result.
+             * @example 1.0.0
+             */
+            engineVersion: string;
+            /** @description SHA-256 over the canonical specification and the exact values the engine received, column by column: equal hashes mean the same model on the same numbers. */
+            inputHash: string;
+            /** @description The request id of the call that computed it. */
+            requestId: string;
+            /** @description The request without its data columns. */
+            specification: {
+                [key: string]: unknown;
+            };
+            /** @description A plain caution: estimates under the stated assumptions, not financial advice. */
+            caution: string;
+            usage: components["schemas"]["UsageChargeDto"];
+            source: components["schemas"]["DataSourceDescriptionDto"];
+            rows: components["schemas"]["RowAccountingDto"];
+            batch: components["schemas"]["BatchFitResultDto"];
+        };
+        RollingModelDto: {
+            /**
+             * @description Response (dependent) column.
+             * @example chargeback_rate
+             */
+            response: string;
+            /**
+             * @description Predictor columns, in order.
+             * @example [
+             *       "ticket_size"
+             *     ]
+             */
+            predictors: string[];
+            /**
+             * @description lin-lin: y on x. log-lin: ln y on x. lin-log: y on ln x. log-log: ln y on ln x. Logs are natural logs; a non-positive value where a log is needed is an error naming the column and row.
+             * @default lin-lin
+             * @enum {string}
+             */
+            form?: "lin-lin" | "log-lin" | "lin-log" | "log-log";
+            /**
+             * @description Estimate an intercept.
+             * @default true
+             */
+            intercept?: boolean;
+        };
+        CreateRollingFitDto: {
+            data: components["schemas"]["DataSourceDto"];
+            /**
+             * @description Level of confidence and prediction intervals, strictly between 0 and 1.
+             * @default 0.95
+             */
+            confidenceLevel?: number;
+            /**
+             * @description reject: any missing value in the model’s columns is an error listing the rows (0-based). drop-rows: rows with a missing value in any used column are left out (listwise); the answer lists them.
+             * @default reject
+             * @enum {string}
+             */
+            missingValues?: "drop-rows" | "reject";
+            /** @description The model refitted in every window (no weights). */
+            model: components["schemas"]["RollingModelDto"];
+            /**
+             * @description Rows per window, in the order the data are given (time order).
+             * @example 250
+             */
+            window: number;
+            /**
+             * @description Rows the window moves each time.
+             * @default 1
+             */
+            step?: number;
+        };
+        CoefficientPathDto: {
+            /**
+             * @description Coefficient name: "(intercept)" or a predictor column name.
+             * @example ticket_size
+             */
+            term: string;
+            /** @description Least-squares estimate in each window, on the model’s scale, in window order. */
+            estimates: number[];
+            /** @description Classical standard error in each window: from s²·C_xx⁻¹ for slopes and s²·(1/window + x̄′C_xx⁻¹x̄) for the intercept, s² = RSS/(windowLength − p). */
+            standardErrors: number[];
+        };
+        RollingFitResultDto: {
+            /**
+             * @description lin-lin: y on x. log-lin: ln y on x. lin-log: y on ln x. log-log: ln y on ln x. Natural logs; every predictor is transformed the same way.
+             * @example lin-lin
+             * @enum {string}
+             */
+            form: "lin-lin" | "log-lin" | "lin-log" | "log-log";
+            /**
+             * @description Rows per window.
+             * @example 60
+             */
+            windowLength: number;
+            /**
+             * @description Rows the window moves each time.
+             * @example 5
+             */
+            step: number;
+            /**
+             * @description Number of windows: floor((n − windowLength)/step) + 1.
+             * @example 29
+             */
+            windowCount: number;
+            /**
+             * @description First row (0-based) of each window; window w covers rows [windowStart[w], windowStart[w] + windowLength).
+             * @example [
+             *       0,
+             *       5,
+             *       10
+             *     ]
+             */
+            windowStart: number[];
+            /** @description One path per coefficient, in design order ("(intercept)" first when present). */
+            coefficientPath: components["schemas"]["CoefficientPathDto"][];
+            /** @description s = √(RSS/(windowLength − p)) in each window, on the model’s scale. */
+            residualStandardError: number[];
+            /** @description 1 − RSS/total in each window: total centred about the window mean with an intercept, uncentred without one. */
+            rSquared: number[];
+            /**
+             * @description Cross-product sums updated as rows enter and leave, about an anchor recomputed periodically (shifted-data algorithm), then each window’s centred normal equations solved by Cholesky.
+             * @example updating-cross-products
+             * @enum {string}
+             */
+            method: "updating-cross-products";
+        };
+        RollingFitResponseDto: {
+            /**
+             * Format: uuid
+             * @description Id of the stored result (GET /v1/results/{resultId}).
+             */
+            id: string;
+            /** @enum {string} */
+            kind: "fit" | "form-comparison" | "prediction" | "batch-fit" | "rolling-fit";
+            /** Format: date-time */
+            createdAt: string;
+            /**
+             * @description Version of the regression engine that computed the result.
+             * @example 1.0.0
+             */
+            engineVersion: string;
+            /** @description SHA-256 over the canonical specification and the exact values the engine received, column by column: equal hashes mean the same model on the same numbers. */
+            inputHash: string;
+            /** @description The request id of the call that computed it. */
+            requestId: string;
+            /** @description The request without its data columns. */
+            specification: {
+                [key: string]: unknown;
+            };
+            /** @description A plain caution: estimates under the stated assumptions, not financial advice. */
+            caution: string;
+            usage: components["schemas"]["UsageChargeDto"];
+            source: components["schemas"]["DataSourceDescriptionDto"];
+            rows: components["schemas"]["RowAccountingDto"];
+            rolling: components["schemas"]["RollingFitResultDto"];
+        };
+        StoredResultResponseDto: {
+            /**
+             * Format: uuid
+             * @description Id of the stored result (GET /v1/results/{resultId}).
+             */
+            id: string;
+            /** @enum {string} */
+            kind: "fit" | "form-comparison" | "prediction" | "batch-fit" | "rolling-fit";
+            /** Format: date-time */
+            createdAt: string;
+            /**
+             * @description Version of the regression engine that computed the result.
+             * @example 1.0.0
+             */
+            engineVersion: string;
+            /** @description SHA-256 over the canonical specification and the exact values the engine received, column by column: equal hashes mean the same model on the same numbers. */
+            inputHash: string;
+            /** @description The request id of the call that computed it. */
+            requestId: string;
+            /** @description The request without its data columns. */
+            specification: {
+                [key: string]: unknown;
+            };
+            /** @description A plain caution: estimates under the stated assumptions, not financial advice. */
+            caution: string;
+            source?: components["schemas"]["DataSourceDescriptionDto"];
+            rows?: components["schemas"]["RowAccountingDto"];
+            fit?: components["schemas"]["FitResultDto"];
+            inference?: components["schemas"]["InferenceResultDto"];
+            diagnostics?: components["schemas"]["DiagnosticsDto"];
+            comparison?: components["schemas"]["FormComparisonResultDto"];
+            prediction?: components["schemas"]["PredictionResultDto"];
+            batch?: components["schemas"]["BatchFitResultDto"];
+            rolling?: components["schemas"]["RollingFitResultDto"];
+        };
+        /** @description RFC 9457 problem details. `type` is one of the URIs under https://leastline.dev/problems/ listed in `x-problem-types`. */
+        ProblemDetails: {
+            /**
+             * Format: uri
+             * @example https://leastline.dev/problems/model-not-estimable
+             */
+            type: string;
+            title: string;
+            status: number;
+            /** @description What went wrong and what to change. */
+            detail: string;
+            /** @description urn:uuid:<request id> */
+            instance: string;
+            /** @description Also in the X-Request-Id header of every answer. */
+            requestId: string;
+            /** @description A finer, stable reason where one exists (e.g. collinear-columns, missing-values). */
+            code?: string;
+            /** @description One entry per offending field or data cell. */
+            errors?: {
+                /** @description JSON Pointer (RFC 6901) into the request, e.g. #/model/predictors/1. */
+                pointer: string;
+                detail: string;
+            }[];
+        } & {
+            [key: string]: unknown;
         };
     };
     responses: never;
@@ -95,6 +3002,15 @@ export interface operations {
                     "application/json": components["schemas"]["HealthStatusDto"];
                 };
             };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
         };
     };
     getReadiness: {
@@ -119,7 +3035,2549 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    getCsrfToken: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CsrfTokenDto"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    getSession: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    signIn: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SignInDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionDto"];
+                };
+            };
+            /** @description Wrong e-mail or password (the same answer for both). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Missing or wrong CSRF token. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Too many failures for this address. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    signOut: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Signed out. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
                 content?: never;
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    requestPasswordReset: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["RequestPasswordResetDto"];
+            };
+        };
+        responses: {
+            202: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PasswordResetAcceptedDto"];
+                };
+            };
+            /** @description Missing or wrong CSRF token. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    completePasswordReset: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CompletePasswordResetDto"];
+            };
+        };
+        responses: {
+            /** @description Password changed. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Missing or wrong CSRF token. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The token matches no link. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The link expired or was already used. */
+            410: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    listTeams: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TeamListDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    createTeam: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateTeamDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TeamDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The slug is taken. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    getTeam: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TeamDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "team:read", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    deleteTeam: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Deleted. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "team:delete", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    updateTeam: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateTeamDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TeamDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "team:update", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    transferOwnership: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["TransferOwnershipDto"];
+            };
+        };
+        responses: {
+            /** @description Transferred. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "team:transfer-ownership", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    changePlan: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ChangePlanDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TeamDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "plan:manage", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    listMembers: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MemberListDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "members:read", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    removeMember: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                userId: string;
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Removed. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "members:manage", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    changeMemberRole: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                userId: string;
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ChangeRoleDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MemberDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "members:manage", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    listInvitations: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationListDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "invitations:manage", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    createInvitation: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateInvitationDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "invitations:manage", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The address is already a member. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    withdrawInvitation: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                invitationId: string;
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Withdrawn. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "invitations:manage", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    previewInvitation: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["InvitationTokenDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationPreviewDto"];
+                };
+            };
+            /** @description The token matches no open invitation. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The invitation expired or was already accepted. */
+            410: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    acceptInvitation: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["AcceptInvitationDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationAcceptanceDto"];
+                };
+            };
+            /** @description The address has an account: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Signed in as another address, or the CSRF token is wrong. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The token matches no open invitation. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The invitation expired or was already accepted. */
+            410: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    listApiKeys: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ApiKeyListDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "keys:manage-own", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    createApiKey: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateApiKeyDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CreatedApiKeyDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "keys:manage-own", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    getApiKey: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                keyId: string;
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ApiKeyDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "keys:manage-own", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    revokeApiKey: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                keyId: string;
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Revoked (or already revoked). */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "keys:manage-own", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    rotateApiKey: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                keyId: string;
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["RotateApiKeyDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CreatedApiKeyDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "keys:manage-own", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key is not active (already rotated, revoked or expired). */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    describeCurrentApiKey: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ApiPrincipalDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    listAuditEvents: {
+        parameters: {
+            query?: {
+                /** @description Items per page. */
+                limit?: number;
+                /** @description The `nextCursor` of the previous page; omit for the first page. */
+                cursor?: string;
+                /** @description Only events of this action. */
+                action?: "session.signed-in" | "team.created" | "team.updated" | "team.plan-changed" | "team.ownership-transferred" | "member.role-changed" | "member.removed" | "invitation.created" | "invitation.revoked" | "invitation.accepted" | "api-key.created" | "api-key.rotated" | "api-key.revoked" | "dataset.created" | "dataset.deleted";
+            };
+            header?: never;
+            path: {
+                /** @description The team. */
+                teamId: unknown;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AuditEventPageDto"];
+                };
+            };
+            /** @description No valid session cookie (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Your role lacks "audit:read", or the CSRF token is wrong (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such team among yours (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    getUsage: {
+        parameters: {
+            query?: {
+                /** @description First UTC day (YYYY-MM-DD), inclusive. Default: 29 days before `to`. */
+                from?: string;
+                /** @description Last UTC day (YYYY-MM-DD), inclusive. Default: today. */
+                to?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UsageReportDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: usage:read (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    getUsageOverview: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UsageOverviewDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: usage:read (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    listDatasets: {
+        parameters: {
+            query?: {
+                /** @description From the previous page’s `nextCursor`. */
+                cursor?: string;
+                limit?: number;
+                /** @description Only versions of this name. */
+                name?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DatasetListDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: datasets:read (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    createDataset: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description Any unique string (1-255 visible ASCII characters, e.g. a UUID). A retry with the same key and the same body returns the first answer (header `Idempotency-Replayed: true`) and is metered once; the same key with a different body is 422; a retry while the first request is still running is 409. Keys are remembered for 24 hours. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateDatasetDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DatasetDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: datasets:write (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Unequal column lengths, no rows, non-finite numbers (problem details). */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    uploadDatasetCsv: {
+        parameters: {
+            query: {
+                /** @description Dataset name (see the JSON form). */
+                name: string;
+                /** @description Field delimiter of the CSV file. */
+                delimiter?: "," | ";" | "\t" | "|";
+            };
+            header?: {
+                /** @description Any unique string (1-255 visible ASCII characters, e.g. a UUID). A retry with the same key and the same body returns the first answer (header `Idempotency-Replayed: true`) and is metered once; the same key with a different body is 422; a retry while the first request is still running is 409. Keys are remembered for 24 hours. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        /** @description The CSV file (multipart part `file`, or the whole body as text/csv). */
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /** Format: binary */
+                    file?: string;
+                };
+                "text/csv": {
+                    /** Format: binary */
+                    file?: string;
+                };
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DatasetDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: datasets:write (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The file exceeds the upload limit (problem details). */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Empty file, missing or duplicate header names, wrong delimiter, a row with the wrong number of fields, not UTF-8 (problem details with `code` and `rows`). */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    getDataset: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                datasetId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DatasetDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: datasets:read (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such dataset for this team (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    deleteDataset: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                datasetId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Deleted. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: datasets:write (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such dataset for this team (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    getDatasetRows: {
+        parameters: {
+            query?: {
+                /** @description 0-based index of the first row. */
+                offset?: number;
+                limit?: number;
+            };
+            header?: never;
+            path: {
+                datasetId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DatasetRowsDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: datasets:read (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such dataset for this team (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    createFit: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description Any unique string (1-255 visible ASCII characters, e.g. a UUID). A retry with the same key and the same body returns the first answer (header `Idempotency-Replayed: true`) and is metered once; the same key with a different body is 422; a retry while the first request is still running is 409. Keys are remembered for 24 hours. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        /** @description JSON, or an Apache Arrow IPC stream (application/vnd.apache.arrow.stream) whose columns are the data and whose schema metadata "leastline.request" holds the rest of the request as JSON (without data.columns). */
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateFitDto"];
+                "application/vnd.apache.arrow.stream": components["schemas"]["CreateFitDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FitResponseDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: fits:run (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Body larger than the limit (64 MiB by default): store the data as a dataset or use the Arrow body. */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The data do not allow the model (problem details with `code`, e.g. collinear-columns, constant-column, non-positive-log-argument, too-few-observations, missing-values, unknown-column; `errors` point at the field or data cell). */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    compareForms: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description Any unique string (1-255 visible ASCII characters, e.g. a UUID). A retry with the same key and the same body returns the first answer (header `Idempotency-Replayed: true`) and is metered once; the same key with a different body is 422; a retry while the first request is still running is 409. Keys are remembered for 24 hours. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        /** @description JSON, or an Apache Arrow IPC stream (application/vnd.apache.arrow.stream) whose columns are the data and whose schema metadata "leastline.request" holds the rest of the request as JSON (without data.columns). */
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CompareFormsDto"];
+                "application/vnd.apache.arrow.stream": components["schemas"]["CompareFormsDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FormComparisonResponseDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: fits:run (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The data do not allow the model (problem details with `code`, e.g. collinear-columns, constant-column, non-positive-log-argument, too-few-observations, missing-values, unknown-column; `errors` point at the field or data cell). */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    createPrediction: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description Any unique string (1-255 visible ASCII characters, e.g. a UUID). A retry with the same key and the same body returns the first answer (header `Idempotency-Replayed: true`) and is metered once; the same key with a different body is 422; a retry while the first request is still running is 409. Keys are remembered for 24 hours. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        /** @description JSON, or an Apache Arrow IPC stream (application/vnd.apache.arrow.stream) whose columns are the data and whose schema metadata "leastline.request" holds the rest of the request as JSON (without data.columns). */
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreatePredictionDto"];
+                "application/vnd.apache.arrow.stream": components["schemas"]["CreatePredictionDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PredictionResponseDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: fits:run (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Unknown fitId for this team (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The data do not allow the model (problem details with `code`, e.g. collinear-columns, constant-column, non-positive-log-argument, too-few-observations, missing-values, unknown-column; `errors` point at the field or data cell). Also: a point with the wrong number of values, or a non-positive value under a log form. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    createBatchFit: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description Any unique string (1-255 visible ASCII characters, e.g. a UUID). A retry with the same key and the same body returns the first answer (header `Idempotency-Replayed: true`) and is metered once; the same key with a different body is 422; a retry while the first request is still running is 409. Keys are remembered for 24 hours. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        /** @description JSON, or an Apache Arrow IPC stream (application/vnd.apache.arrow.stream) whose columns are the data and whose schema metadata "leastline.request" holds the rest of the request as JSON (without data.columns). */
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateBatchFitDto"];
+                "application/vnd.apache.arrow.stream": components["schemas"]["CreateBatchFitDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BatchFitResponseDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: fits:run (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The data do not allow the model (problem details with `code`, e.g. collinear-columns, constant-column, non-positive-log-argument, too-few-observations, missing-values, unknown-column; `errors` point at the field or data cell). */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    createRollingFit: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description Any unique string (1-255 visible ASCII characters, e.g. a UUID). A retry with the same key and the same body returns the first answer (header `Idempotency-Replayed: true`) and is metered once; the same key with a different body is 422; a retry while the first request is still running is 409. Keys are remembered for 24 hours. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        /** @description JSON, or an Apache Arrow IPC stream (application/vnd.apache.arrow.stream) whose columns are the data and whose schema metadata "leastline.request" holds the rest of the request as JSON (without data.columns). */
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateRollingFitDto"];
+                "application/vnd.apache.arrow.stream": components["schemas"]["CreateRollingFitDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["RollingFitResponseDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: fits:run (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The data do not allow the model (problem details with `code`, e.g. collinear-columns, constant-column, non-positive-log-argument, too-few-observations, missing-values, unknown-column; `errors` point at the field or data cell). Also: a window longer than the series. */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+        };
+    };
+    getResult: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                resultId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["StoredResultResponseDto"];
+                };
+            };
+            /** @description Missing, malformed, unknown, revoked, expired or rotated-out key (problem details). */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description The key lacks one of: fits:run (problem details). */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description No such result for this team (problem details). */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description A per-key or per-team quota is used up (problem details). Every answer carries `RateLimit-Policy` and `RateLimit` (IETF draft fields); a 429 also carries `Retry-After` in seconds. */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
+            };
+            /** @description Any other failure (problem details). */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["ProblemDetails"];
+                };
             };
         };
     };

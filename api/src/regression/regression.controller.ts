@@ -3,6 +3,7 @@ import {
   ApiBody,
   ApiConsumes,
   ApiCreatedResponse,
+  ApiExtraModels,
   ApiNotFoundResponse,
   ApiOkResponse,
   ApiOperation,
@@ -37,6 +38,7 @@ const ENGINE_REJECTION =
 /** Documents the JSON body plus the compact Arrow IPC alternative for one request DTO. */
 function JsonOrArrowBody(dto: new () => object) {
   return (target: object, key: string | symbol, descriptor: PropertyDescriptor) => {
+    ApiExtraModels(dto)(target, key, descriptor);
     ApiConsumes('application/json', ARROW_STREAM_CONTENT_TYPE)(target, key, descriptor);
     ApiBody({
       description:
