@@ -39,6 +39,7 @@ export default defineConfig({
   test: {
     environment: 'jsdom',
     include: ['src/**/*.spec.{ts,tsx}'],
+    setupFiles: ['src/testing/jsdom-shims.ts'],
     restoreMocks: true,
     css: false,
   },

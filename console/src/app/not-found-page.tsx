@@ -14,7 +14,7 @@ export function NotFoundPage() {
         description="The link may be out of date, or the page may have moved."
       >
         <Button asChild>
-          <RouterLink to={paths.overview}>Go to the overview</RouterLink>
+          <RouterLink to={paths.home}>Go to the console</RouterLink>
         </Button>
       </EmptyState>
     </div>

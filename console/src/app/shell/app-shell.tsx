@@ -6,13 +6,15 @@ import { TeamSwitcher } from '@/app/shell/team-switcher';
 import { UserMenu } from '@/app/shell/user-menu';
 import { AppearanceToggle } from '@/components/appearance-toggle';
 import { LogoMark } from '@/components/brand/logo-mark';
-import { paths } from '@/config/paths';
+import { teamPath } from '@/config/paths';
+import { useCurrentTeam } from '@/lib/current-team';
 import { HealthIndicator } from '@/features/status/components/health-indicator';
 import { brandTheme } from '@/app/theme';
 import '@/app/shell/app-shell.css';
 
 export function AppShell() {
   const navigation = useNavigation();
+  const { team } = useCurrentTeam();
 
   return (
     <div className="ll-shell">
@@ -24,7 +26,7 @@ export function AppShell() {
       {/* The band keeps its dark ink in both themes, so its controls always use dark tokens. */}
       <Theme {...brandTheme} appearance="dark" hasBackground={false} asChild>
         <header className="ll-header">
-          <RouterLink to={paths.overview} className="ll-brand" aria-label="Leastline, go to overview">
+          <RouterLink to={teamPath(team.id)} className="ll-brand" aria-label="Leastline, go to overview">
             <LogoMark size={28} />
             <span className="ll-wordmark">Leastline</span>
           </RouterLink>

@@ -1,12 +1,14 @@
 import { Text } from '@radix-ui/themes';
 import { NavLink } from 'react-router-dom';
-import { navGroups } from '@/app/shell/nav-items';
-import { paths } from '@/config/paths';
+import { navGroupsFor } from '@/app/shell/nav-items';
+import { teamPath } from '@/config/paths';
+import { useCurrentTeam } from '@/lib/current-team';
 
 export function ShellNav() {
+  const { team } = useCurrentTeam();
   return (
     <nav aria-label="Main" className="ll-nav">
-      {navGroups.map((group, groupIndex) => {
+      {navGroupsFor(team.yourRole).map((group, groupIndex) => {
         const headingId = group.label ? `nav-group-${groupIndex}` : undefined;
         return (
           <div key={group.label ?? groupIndex} className="ll-nav-group">
@@ -19,8 +21,8 @@ export function ShellNav() {
               {group.items.map((item) => {
                 const Icon = item.icon;
                 return (
-                  <li key={item.to}>
-                    <NavLink to={item.to} end={item.to === paths.overview} className="ll-nav-link">
+                  <li key={item.section}>
+                    <NavLink to={teamPath(team.id, item.section)} end={item.section === 'overview'} className="ll-nav-link">
                       <Icon aria-hidden />
                       <span className="ll-nav-label">{item.label}</span>
                       {item.soon ? (

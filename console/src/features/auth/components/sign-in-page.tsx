@@ -1,85 +1,95 @@
-import { InfoCircledIcon } from '@radix-ui/react-icons';
-import { Button, Callout, Card, Flex, Heading, Text, TextField } from '@radix-ui/themes';
+import { Button, Flex, Heading, Link, Text, TextField } from '@radix-ui/themes';
 import { useState, type FormEvent } from 'react';
-import { LogoMark } from '@/components/brand/logo-mark';
+import { Navigate, Link as RouterLink, useNavigate, useSearchParams } from 'react-router-dom';
+import { CenteredLayout } from '@/components/centered-layout';
+import { FormField } from '@/components/form-field';
+import { PageLoading } from '@/components/page-loading';
+import { ProblemCallout } from '@/components/problem-callout';
 import { useDocumentTitle } from '@/components/use-document-title';
-import '@/features/auth/components/sign-in-page.css';
+import { paths, safeNextPath } from '@/config/paths';
+import { ApiProblem } from '@/lib/problem';
+import { useSession } from '@/features/auth/api/get-session';
+import { useSignIn } from '@/features/auth/api/sign-in';
 
 export function SignInPage() {
   useDocumentTitle('Sign in');
-  const [submitted, setSubmitted] = useState(false);
+  const [searchParams] = useSearchParams();
+  const next = safeNextPath(searchParams.get('next'));
+  const navigate = useNavigate();
+  const session = useSession();
+  const signIn = useSignIn();
+  const [email, setEmail] = useState(searchParams.get('email') ?? '');
+  const [password, setPassword] = useState('');
+
+  if (session.isPending) return <PageLoading />;
+  if (session.data && !signIn.isSuccess) return <Navigate to={next} replace />;
 
   function handleSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
-    setSubmitted(true);
+    signIn.mutate({ email, password }, { onSuccess: () => navigate(next, { replace: true }) });
   }
 
+  const problem = signIn.error instanceof ApiProblem ? signIn.error : null;
+
   return (
-    <main id="main-content" tabIndex={-1} className="ll-sign-in">
-      <Flex direction="column" align="center" gap="5" className="ll-sign-in-column">
-        <Flex align="center" gap="3">
-          <LogoMark size={36} />
-          <Text size="6" weight="medium" className="ll-wordmark">
-            Leastline
-          </Text>
+    <CenteredLayout
+      footer={
+        <>
+          Forgot your password?{' '}
+          <Link asChild>
+            <RouterLink to={paths.resetPassword}>Reset it by e-mail</RouterLink>
+          </Link>
+        </>
+      }
+    >
+      <form onSubmit={handleSubmit} noValidate>
+        <Flex direction="column" gap="4">
+          <Flex direction="column" gap="1">
+            <Heading as="h1" size="5" weight="medium">
+              Sign in to the console
+            </Heading>
+            <Text size="2" color="gray">
+              Use the e-mail address your team invited.
+            </Text>
+          </Flex>
+
+          <FormField id="sign-in-email" label="E-mail" error={problem?.fieldError('email')}>
+            {(control) => (
+              <TextField.Root
+                {...control}
+                name="email"
+                type="email"
+                autoComplete="email"
+                required
+                size="3"
+                value={email}
+                onChange={(event) => setEmail(event.target.value)}
+              />
+            )}
+          </FormField>
+
+          <FormField id="sign-in-password" label="Password" error={problem?.fieldError('password')}>
+            {(control) => (
+              <TextField.Root
+                {...control}
+                name="password"
+                type="password"
+                autoComplete="current-password"
+                required
+                size="3"
+                value={password}
+                onChange={(event) => setPassword(event.target.value)}
+              />
+            )}
+          </FormField>
+
+          <ProblemCallout error={signIn.error} />
+
+          <Button type="submit" size="3" loading={signIn.isPending}>
+            Sign in
+          </Button>
         </Flex>
-
-        <Card size="4" className="ll-sign-in-card">
-          <form onSubmit={handleSubmit}>
-            <Flex direction="column" gap="4">
-              <Flex direction="column" gap="1">
-                <Heading as="h1" size="5" weight="medium">
-                  Sign in to the console
-                </Heading>
-                <Text size="2" color="gray">
-                  Use the e-mail address your team invited.
-                </Text>
-              </Flex>
-
-              <Flex direction="column" gap="1">
-                <Text as="label" htmlFor="sign-in-email" size="2" weight="medium">
-                  E-mail
-                </Text>
-                <TextField.Root
-                  id="sign-in-email"
-                  name="email"
-                  type="email"
-                  autoComplete="email"
-                  required
-                  size="3"
-                />
-              </Flex>
-
-              <Flex direction="column" gap="1">
-                <Text as="label" htmlFor="sign-in-password" size="2" weight="medium">
-                  Password
-                </Text>
-                <TextField.Root
-                  id="sign-in-password"
-                  name="password"
-                  type="password"
-                  autoComplete="current-password"
-                  required
-                  size="3"
-                />
-              </Flex>
-
-              {submitted ? (
-                <Callout.Root id="sign-in-status" role="status" color="amber" size="1">
-                  <Callout.Icon>
-                    <InfoCircledIcon />
-                  </Callout.Icon>
-                  <Callout.Text>Signing in is not connected yet; accounts arrive in a coming release.</Callout.Text>
-                </Callout.Root>
-              ) : null}
-
-              <Button type="submit" size="3">
-                Sign in
-              </Button>
-            </Flex>
-          </form>
-        </Card>
-      </Flex>
-    </main>
+      </form>
+    </CenteredLayout>
   );
 }
