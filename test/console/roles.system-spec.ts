@@ -16,10 +16,10 @@ afterAll(async () => {
   await api?.stop();
 });
 
-// Expected from the permission table in the API's auth section: which console sections each role can use.
+// Expected from the permission table in README.md: which console sections each role can use.
 const expectedNav: Record<DemoRole, string[]> = {
   owner: ['Overview', 'Playground', 'Datasets', 'API keys', 'Team', 'Usage', 'Billing'],
-  admin: ['Overview', 'API keys', 'Team'],
+  admin: ['Overview', 'API keys', 'Team', 'Usage'],
   developer: ['Overview', 'Playground', 'Datasets', 'API keys', 'Team'],
   billing: ['Overview', 'Team', 'Usage', 'Billing'],
 };

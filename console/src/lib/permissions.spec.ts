@@ -6,7 +6,7 @@ const me = 'c0ffee00-1111-4222-8333-444455556666';
 const someoneElse = 'abcdef00-1111-4222-8333-444455556666';
 
 describe('role permissions', () => {
-  // Rows copied from the permission table in the API's auth section (owner, admin, developer, billing).
+  // Rows copied from the permission table in README.md (owner, admin, developer, billing).
   const table: Array<[TeamPermission, boolean, boolean, boolean, boolean]> = [
     ['team:read', true, true, true, true],
     ['team:update', true, true, false, false],
@@ -17,7 +17,7 @@ describe('role permissions', () => {
     ['keys:manage-own', true, true, true, false],
     ['audit:read', true, true, false, false],
     ['playground:use', true, false, true, false],
-    ['usage:read', true, false, false, true],
+    ['usage:read', true, true, false, true],
     ['plan:manage', true, false, false, true],
   ];
 

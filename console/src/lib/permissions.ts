@@ -44,7 +44,7 @@ export const permissionRoles = {
   'datasets:read': ['owner', 'developer'],
   'datasets:write': ['owner', 'developer'],
   'plan:manage': ['owner', 'billing'],
-  'usage:read': ['owner', 'billing'],
+  'usage:read': ['owner', 'admin', 'billing'],
   'invoices:read': ['owner', 'billing'],
   'payment-method:manage': ['owner', 'billing'],
 } as const satisfies Record<string, readonly TeamRole[]>;

@@ -1,11 +1,11 @@
 import { ArrowRightIcon } from '@radix-ui/react-icons';
 import { Badge, Card, Flex, Heading, Text } from '@radix-ui/themes';
 import { Link as RouterLink } from 'react-router-dom';
-import { EmptyState } from '@/components/empty-state';
 import { PageHeader } from '@/components/page-header';
 import { teamPath, type TeamSection } from '@/config/paths';
 import { useCurrentTeam } from '@/lib/current-team';
 import { roleAllows, roleLabels, roleSummaries, type TeamPermission } from '@/lib/permissions';
+import { UsageSummary } from '@/features/overview/components/usage-summary';
 import '@/features/overview/components/overview-page.css';
 
 type QuickLink = { section: TeamSection; permission: TeamPermission; title: string; text: string; hash?: string };
@@ -112,14 +112,7 @@ export function OverviewPage() {
           </Flex>
         </Card>
 
-        {/* Slot for this period's usage figures; filled once the usage endpoints exist. */}
-        <Card size="3" className="ll-panel ll-usage-slot" data-slot="usage-summary">
-          <EmptyState
-            headingLevel="h2"
-            title="Usage figures arrive soon"
-            description="This period's requests and fitted observations, against the plan's allowance, will be summarised here."
-          />
-        </Card>
+        <UsageSummary />
       </div>
 
       <section aria-labelledby="quick-links-heading" className="ll-section">

@@ -1,0 +1,19 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import { expectData } from '@/lib/problem';
+
+export function getUsageOverview(teamId: string, signal?: AbortSignal) {
+  return expectData(apiClient.GET('/v1/usage/overview', { headers: { 'X-Leastline-Team': teamId }, signal }));
+}
+
+export function usageOverviewQueryOptions(teamId: string) {
+  return queryOptions({
+    queryKey: ['usage-overview', teamId],
+    queryFn: ({ signal }) => getUsageOverview(teamId, signal),
+    refetchInterval: 60_000,
+  });
+}
+
+export function useUsageOverview(teamId: string, enabled: boolean) {
+  return useQuery({ ...usageOverviewQueryOptions(teamId), enabled });
+}
