@@ -36,7 +36,15 @@ export interface CreateAppOptions {
 export async function createApp(options: CreateAppOptions = {}): Promise<NestFastifyApplication> {
   const logLevel = options.logLevel ?? 'info';
   const adapter = new FastifyAdapter({
-    logger: logLevel === 'silent' ? false : { level: logLevel },
+    // Same line shape as JsonLogger: level as a word, ISO time, `reqId` naming the request.
+    logger:
+      logLevel === 'silent'
+        ? false
+        : {
+            level: logLevel,
+            formatters: { level: (label: string) => ({ level: label }) },
+            timestamp: () => `,"time":"${new Date().toISOString()}"`,
+          },
     genReqId: generateRequestId,
     bodyLimit: options.bodyLimitBytes ?? 64 * 1024 * 1024,
     trustProxy: false,

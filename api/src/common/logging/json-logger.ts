@@ -5,7 +5,7 @@ const ORDER: Record<Level | 'silent', number> = { silent: 0, fatal: 1, error: 2,
 
 /**
  * Structured logs: one JSON object per line on stdout, the same shape as the HTTP layer's request logs
- * (level, time, msg, plus fields such as requestId), so one tool can read both.
+ * (level as a word, ISO time, msg, plus fields such as reqId), so one tool can read both.
  */
 export class JsonLogger implements LoggerService {
   constructor(private readonly threshold: Level | 'silent' = 'info') {}

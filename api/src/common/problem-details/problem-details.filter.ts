@@ -29,7 +29,7 @@ export function sendProblem(exception: unknown, request: FastifyRequest, reply: 
   const problem = buildProblem(exception, requestId);
   if (problem.unexpected) {
     const stack = exception instanceof Error ? exception.stack : String(exception);
-    logger.error({ msg: 'unexpected error', requestId, method: request.method, url: request.url, stack });
+    logger.error({ msg: 'unexpected error', reqId: requestId, method: request.method, url: request.url, stack });
   }
   if (reply.sent) return;
   reply.status(problem.body.status).headers(problem.headers).type(PROBLEM_CONTENT_TYPE).send(problem.body);

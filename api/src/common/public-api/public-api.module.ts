@@ -83,7 +83,7 @@ export class PublicApiModule implements OnModuleInit {
           requestId: String(request.id),
         });
       } catch (error) {
-        request.log.warn({ err: error, requestId: request.id }, 'request log write failed');
+        request.log.warn({ err: error }, 'request log write failed');
       }
     });
   }
