@@ -131,6 +131,17 @@ describe('public API: datasets', () => {
       expect(fit.body.type).toMatch(/not-found$/);
     });
 
+    it('answers an unknown dataset id with 404, for reading and for fitting', async () => {
+      const unknown = '7f1c2d3e-4b5a-4c6d-8e9f-0a1b2c3d4e5f';
+      await request(app.getHttpServer()).get(`/v1/datasets/${unknown}/rows`).set(bearer(team.key)).expect(404);
+      const fit = await request(app.getHttpServer())
+        .post('/v1/fits')
+        .set(bearer(team.key))
+        .send({ data: { datasetId: unknown }, model: { response: 'y', predictors: ['x'] } })
+        .expect(404);
+      expect(fit.body.errors[0].pointer).toBe('#/data/datasetId');
+    });
+
     it('deletes softly and writes the team audit log', async () => {
       const upload = await uploadCsv('x,y\n1,2\n2,4\n3,7\n', 'to-delete').expect(201);
       await request(app.getHttpServer()).delete(`/v1/datasets/${upload.body.id}`).set(bearer(team.key)).expect(204);

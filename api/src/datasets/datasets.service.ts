@@ -195,13 +195,13 @@ export class DatasetsService {
     return { items, nextCursor: rows.length > options.limit && last ? datasetCursor(last) : null };
   }
 
-  async get(teamId: string, datasetId: string): Promise<Dataset> {
+  async get(teamId: string, datasetId: string, pointer = '#/datasetId'): Promise<Dataset> {
     const dataset = /^[0-9a-f-]{36}$/i.test(datasetId)
       ? await this.datasets.findOne({ where: { id: datasetId, teamId, deletedAt: null } as WhereOptions<Dataset> })
       : null;
     if (!dataset) {
       throw new ProblemException(PROBLEM_TYPES.notFound, `No dataset with id "${datasetId}" exists for this team.`, [
-        { pointer: '#/datasetId', detail: 'unknown dataset' },
+        { pointer, detail: 'unknown dataset' },
       ]);
     }
     return dataset;
@@ -238,7 +238,7 @@ export class DatasetsService {
    * decides what to do with text columns and missing values.
    */
   async loadColumns(teamId: string, datasetId: string, names: string[], pointer = '#/columns'): Promise<LoadedDataset> {
-    const dataset = await this.get(teamId, datasetId);
+    const dataset = await this.get(teamId, datasetId, '#/data/datasetId');
     const index = new Map<string, { column: StoredColumn; position: number }>();
     dataset.columns.forEach((column, position) => index.set(column.name, { column, position }));
     const unknown = names.filter((name) => !index.has(name));
