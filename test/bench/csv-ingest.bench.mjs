@@ -1,21 +1,13 @@
 // CSV ingest benchmark: the same 1e6 × 2 numeric table parsed by several well-known CSV parsers, against
 // JSON.parse of the same numbers, measured side by side in one run. Prints MB/s and the ratio to JSON.parse.
 // The dataset upload path uses the parser this benchmark shows fastest (target: at least 1/3 of JSON.parse).
+import { mulberry32 } from './seeded-random.mjs';
 import { createRequire } from 'node:module';
 
 const require = createRequire(import.meta.url);
 const rows = Number(process.env.BENCH_CSV_ROWS ?? 1_000_000);
 
 // Invented series from a seeded generator (mulberry32): ticket sizes and settlement fees of a fictional processor.
-function mulberry32(seed) {
-  return () => {
-    seed |= 0;
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 const random = mulberry32(20261202);
 const ticket = new Float64Array(rows);
 const fee = new Float64Array(rows);

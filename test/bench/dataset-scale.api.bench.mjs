@@ -1,6 +1,7 @@
 // Dataset scale benchmark against a running API (started by `npm run bench`): streams a 10-million-row ×
 // 3-column CSV of invented settlement data to POST /v1/datasets/csv, fits it by dataset id, and prints the
 // throughput, the fit time and the API process's peak memory. Never part of `npm test`.
+import { mulberry32 } from './seeded-random.mjs';
 import { readFileSync } from 'node:fs';
 
 const base = process.env.LEASTLINE_BENCH_URL;
@@ -9,15 +10,6 @@ const apiPid = Number(process.env.LEASTLINE_BENCH_API_PID);
 const rows = Number(process.env.BENCH_DATASET_ROWS ?? 10_000_000);
 if (!base || !key) throw new Error('run through `npm run bench` (it starts the API and passes its URL and key)');
 
-function mulberry32(seed) {
-  return () => {
-    seed |= 0;
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** Invented series: settlement delay (days) against ticket size and a merchant risk score. */
 function* csvChunks() {

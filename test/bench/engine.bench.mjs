@@ -11,6 +11,7 @@
 // Environment: ENGINE_DIST (path to the compiled engine's index.js), BENCH_ENGINE_SIMPLE_SIZES,
 // BENCH_ENGINE_WIDE_SIZES (comma-separated row counts), BENCH_ENGINE_SKIP_ML_MATRIX=1.
 // Data: invented series for a fictional card processor ("Ferrowick Pay"), from a seeded generator.
+import { mulberry32 } from './seeded-random.mjs';
 import { createRequire } from 'node:module';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
@@ -26,15 +27,6 @@ const simpleSizes = sizes('BENCH_ENGINE_SIMPLE_SIZES', '100000,1000000,10000000'
 const wideSizes = sizes('BENCH_ENGINE_WIDE_SIZES', '100000,1000000');
 const skipMlMatrix = process.env.BENCH_ENGINE_SKIP_ML_MATRIX === '1';
 
-function mulberry32(seed) {
-  return () => {
-    seed |= 0;
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 function normalFrom(uniform) {
   return () => Math.sqrt(-2 * Math.log(1 - uniform())) * Math.cos(2 * Math.PI * uniform());
 }

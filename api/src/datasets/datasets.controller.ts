@@ -1,4 +1,4 @@
-import { Body, Controller, Delete, Get, HttpCode, Inject, Param, Post, Query, Req, Res, UseInterceptors } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Inject, Param, Post, Query, Req, Res } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
 import {
   ApiBody,
@@ -16,11 +16,10 @@ import type { FastifyReply, FastifyRequest } from 'fastify';
 import { Readable } from 'node:stream';
 import { AuditService } from '../audit/audit.service';
 import { CSV_CONTENT_TYPES } from '../common/body-parsers/register-body-parsers';
-import { IdempotentInterceptor } from '../common/idempotency/idempotent.interceptor';
 import { nextPageLink } from '../common/pagination/cursor';
 import { ProblemException } from '../common/problem-details/problem.exception';
 import { PROBLEM_TYPES } from '../common/problem-details/problem-types';
-import { CurrentPrincipal, IdempotencyKeyHeader, PublicApi } from '../common/public-api/public-api.decorators';
+import { CurrentPrincipal, Idempotent, PublicApi } from '../common/public-api/public-api.decorators';
 import { PublicPrincipal } from '../common/public-api/public-principal';
 import { appConfig } from '../config/configuration';
 import { toDatasetDto } from './dataset-response';
@@ -59,8 +58,7 @@ export class DatasetsController {
 
   @Post()
   @PublicApi('datasets:write')
-  @UseInterceptors(IdempotentInterceptor)
-  @IdempotencyKeyHeader()
+  @Idempotent()
   @ApiOperation({
     operationId: 'createDataset',
     summary: 'Store a dataset from JSON columns or rows',
@@ -85,8 +83,7 @@ export class DatasetsController {
 
   @Post('csv')
   @PublicApi('datasets:write')
-  @UseInterceptors(IdempotentInterceptor)
-  @IdempotencyKeyHeader()
+  @Idempotent()
   @ApiOperation({
     operationId: 'uploadDatasetCsv',
     summary: 'Upload a CSV file as a dataset',
@@ -151,7 +148,7 @@ export class DatasetsController {
     @Query() query: ListDatasetsQueryDto,
     @Res({ passthrough: true }) reply: FastifyReply,
   ): Promise<DatasetListDto> {
-    const limit = query.limit ?? 20;
+    const limit = query.limit ?? 25;
     const page = await this.datasets.list(principal.teamId, { cursor: query.cursor, limit, name: query.name });
     if (page.nextCursor) {
       void reply.header(

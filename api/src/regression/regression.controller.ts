@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, Post, Req, UseInterceptors } from '@nestjs/common';
+import { Body, Controller, Get, Param, Post, Req } from '@nestjs/common';
 import {
   ApiBody,
   ApiConsumes,
@@ -14,8 +14,7 @@ import {
 } from '@nestjs/swagger';
 import type { FastifyRequest } from 'fastify';
 import { ARROW_REQUEST_METADATA_KEY, ARROW_STREAM_CONTENT_TYPE } from '../common/body-parsers/arrow-body';
-import { IdempotentInterceptor } from '../common/idempotency/idempotent.interceptor';
-import { CurrentPrincipal, IdempotencyKeyHeader, PublicApi } from '../common/public-api/public-api.decorators';
+import { CurrentPrincipal, Idempotent, PublicApi } from '../common/public-api/public-api.decorators';
 import { PublicPrincipal } from '../common/public-api/public-principal';
 import { CreateBatchFitDto } from './dto/batch-fit.dto';
 import { CompareFormsDto } from './dto/compare-forms.dto';
@@ -56,8 +55,7 @@ export class RegressionController {
 
   @Post('fits')
   @PublicApi('fits:run')
-  @UseInterceptors(IdempotentInterceptor)
-  @IdempotencyKeyHeader()
+  @Idempotent()
   @JsonOrArrowBody(CreateFitDto)
   @ApiOperation({
     operationId: 'createFit',
@@ -77,8 +75,7 @@ export class RegressionController {
 
   @Post('form-comparisons')
   @PublicApi('fits:run')
-  @UseInterceptors(IdempotentInterceptor)
-  @IdempotencyKeyHeader()
+  @Idempotent()
   @JsonOrArrowBody(CompareFormsDto)
   @ApiOperation({
     operationId: 'compareForms',
@@ -96,8 +93,7 @@ export class RegressionController {
 
   @Post('predictions')
   @PublicApi('fits:run')
-  @UseInterceptors(IdempotentInterceptor)
-  @IdempotencyKeyHeader()
+  @Idempotent()
   @JsonOrArrowBody(CreatePredictionDto)
   @ApiOperation({
     operationId: 'createPrediction',
@@ -116,8 +112,7 @@ export class RegressionController {
 
   @Post('batch-fits')
   @PublicApi('fits:run')
-  @UseInterceptors(IdempotentInterceptor)
-  @IdempotencyKeyHeader()
+  @Idempotent()
   @JsonOrArrowBody(CreateBatchFitDto)
   @ApiOperation({
     operationId: 'createBatchFit',
@@ -134,8 +129,7 @@ export class RegressionController {
 
   @Post('rolling-fits')
   @PublicApi('fits:run')
-  @UseInterceptors(IdempotentInterceptor)
-  @IdempotencyKeyHeader()
+  @Idempotent()
   @JsonOrArrowBody(CreateRollingFitDto)
   @ApiOperation({
     operationId: 'createRollingFit',

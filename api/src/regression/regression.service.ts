@@ -12,11 +12,13 @@ import { CompareFormsDto } from './dto/compare-forms.dto';
 import { CreateBatchFitDto } from './dto/batch-fit.dto';
 import { CreateFitDto } from './dto/create-fit.dto';
 import { CreatePredictionDto } from './dto/create-prediction.dto';
-import { CovarianceChoiceDto, DataSourceDto } from './dto/model-request.dto';
+import { ComparedModelDto } from './dto/compare-forms.dto';
+import { CovarianceChoiceDto, DataSourceDto, ModelSpecDto } from './dto/model-request.dto';
 import { CreateRollingFitDto } from './dto/rolling-fit.dto';
 import { analyseModelWithSnapshot, fitBatch, fitRolling, predictAt, predictionModelFor, PredictionModel } from './engine/analyse-model';
 import type { CovarianceOption } from './engine/analyse-model';
 import { compareForms } from './engine/compare-forms';
+import { FitInput } from './engine/fit-input';
 import { fitModel } from './engine/fit-model';
 import { ENGINE_VERSION } from './engine/version';
 import { runEngine } from './engine-problem';
@@ -76,16 +78,7 @@ export class RegressionService {
     const model = body.model;
     const requirements = this.requirements(model.response, model.predictors, model.weights, body.covariance);
     const { data, source } = await this.loadData(context, body.data, requirements, body.missingValues ?? 'reject');
-    const engineInput = {
-      columns: data.numeric,
-      response: model.response,
-      predictors: model.predictors,
-      intercept: model.intercept ?? true,
-      ...(model.weights ? { weights: model.weights } : {}),
-      form: model.form ?? 'lin-lin',
-      confidenceLevel: body.confidenceLevel ?? 0.95,
-      includeObservations: body.includeObservations ?? false,
-    };
+    const engineInput = { ...fitInputOf(model, data, body.confidenceLevel), includeObservations: body.includeObservations ?? false };
     const covariance = this.covarianceOption(body.covariance, data);
     const diagnostics = body.diagnostics === 'none' ? [] : (body.diagnostics ?? 'all');
     const fit = runEngine(() => fitModel(engineInput), DATA_POINTER);
@@ -135,15 +128,7 @@ export class RegressionService {
     const { data, source } = await this.loadData(context, body.data, requirements, body.missingValues ?? 'reject');
     const comparison = runEngine(
       () =>
-        compareForms({
-          columns: data.numeric,
-          response: model.response,
-          predictors: model.predictors,
-          intercept: model.intercept ?? true,
-          ...(model.weights ? { weights: model.weights } : {}),
-          confidenceLevel: body.confidenceLevel ?? 0.95,
-          ...(body.forms ? { forms: body.forms } : {}),
-        }),
+        compareForms({ ...fitInputOf(model, data, body.confidenceLevel), ...(body.forms ? { forms: body.forms } : {}) }),
       DATA_POINTER,
     );
     const specification = this.specificationOf(body);
@@ -165,16 +150,7 @@ export class RegressionService {
     const covariance = this.covarianceOption(body.covariance, data);
     const snapshot = runEngine(
       () =>
-        predictionModelFor({
-          columns: data.numeric,
-          response: model.response,
-          predictors: model.predictors,
-          intercept: model.intercept ?? true,
-          ...(model.weights ? { weights: model.weights } : {}),
-          form: model.form ?? 'lin-lin',
-          confidenceLevel: body.confidenceLevel ?? 0.95,
-          ...(covariance ? { covariance } : {}),
-        }),
+        predictionModelFor({ ...fitInputOf(model, data, body.confidenceLevel), ...(covariance ? { covariance } : {}) }),
       DATA_POINTER,
     );
     const prediction = runEngine(() => predictAt(snapshot.model, body.points, snapshot.confidenceLevel), DATA_POINTER);
@@ -404,6 +380,19 @@ export class RegressionService {
     });
     return { ...envelope, usage: { units: usage.units, observations: work.observations }, ...answer };
   }
+}
+
+/** The engine's fit input for a model specification and prepared columns (request defaults applied). */
+function fitInputOf(model: ModelSpecDto | ComparedModelDto, data: PreparedData, confidenceLevel: number | undefined): FitInput {
+  return {
+    columns: data.numeric,
+    response: model.response,
+    predictors: model.predictors,
+    intercept: model.intercept ?? true,
+    ...(model.weights ? { weights: model.weights } : {}),
+    ...('form' in model && model.form ? { form: model.form } : {}),
+    confidenceLevel: confidenceLevel ?? 0.95,
+  };
 }
 
 function dedupe(requirements: ColumnRequirement[]): ColumnRequirement[] {

@@ -1,4 +1,5 @@
-import { applyDecorators, createParamDecorator, ExecutionContext, UseGuards } from '@nestjs/common';
+import { applyDecorators, createParamDecorator, ExecutionContext, UseGuards, UseInterceptors } from '@nestjs/common';
+import { IdempotentInterceptor } from '../idempotency/idempotent.interceptor';
 import { ApiBearerAuth, ApiForbiddenResponse, ApiHeader, ApiSecurity, ApiTooManyRequestsResponse, ApiUnauthorizedResponse } from '@nestjs/swagger';
 import { ApiKeyScope } from '../../api-keys/api-key-scopes';
 import { API_KEY_BEARER_SECURITY, API_KEY_HEADER_SECURITY, RequireScopes } from '../../api-keys/api-key.decorators';
@@ -25,8 +26,12 @@ export function PublicApi(...scopes: ApiKeyScope[]) {
   );
 }
 
-/** For POST routes: documents the Idempotency-Key header (IETF draft) the interceptor honours. */
-export function IdempotencyKeyHeader() {
+/** For POST routes: honours `Idempotency-Key` (IETF draft) and documents the header. */
+export function Idempotent() {
+  return applyDecorators(UseInterceptors(IdempotentInterceptor), IdempotencyKeyHeader());
+}
+
+function IdempotencyKeyHeader() {
   return ApiHeader({
     name: 'Idempotency-Key',
     required: false,

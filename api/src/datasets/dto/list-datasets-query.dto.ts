@@ -1,22 +1,9 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
+import { PageQueryDto } from '../../common/pagination/page-query.dto';
 import { IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 
-export class ListDatasetsQueryDto {
-  @ApiPropertyOptional({ description: 'From the previous page’s `nextCursor`.' })
-  @IsOptional()
-  @IsString()
-  @MaxLength(200)
-  cursor?: string;
-
-  @ApiPropertyOptional({ minimum: 1, maximum: 100, default: 20 })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  @Max(100)
-  limit?: number;
-
+export class ListDatasetsQueryDto extends PageQueryDto {
   @ApiPropertyOptional({ description: 'Only versions of this name.' })
   @IsOptional()
   @IsString()

@@ -11,6 +11,7 @@
  * and `waldTest` is null.
  */
 
+import type { CoefficientEstimate } from './coefficient-inference';
 import { studentTInverseSurvival, studentTTwoSidedPValue, fisherFSurvival } from './distributions';
 import { CoefficientCovariance, CovarianceDescription } from './covariance';
 import { cholesky, choleskySolve, SquareMatrix } from './diagnostics/small-matrix';
@@ -21,14 +22,8 @@ export interface TermLayout {
   hasIntercept: boolean;
 }
 
-export interface CoefficientRow {
-  term: string;
-  estimate: number;
-  standardError: number;
-  tStatistic: number | null;
-  pValue: number | null;
-  confidenceInterval: { lower: number; upper: number };
-}
+/** One row of the coefficient table: the same shape as the classical table's (coefficient-inference.ts). */
+export type CoefficientRow = CoefficientEstimate;
 
 export interface WaldTest {
   /** Terms tested jointly against 0. */
