@@ -54,7 +54,7 @@ describe('console shell', () => {
 
   it.each([
     ['owner', ['Overview', 'Playground', 'Datasets', 'API keys', 'Team', 'Usage', 'Billing']],
-    ['admin', ['Overview', 'API keys', 'Team']],
+    ['admin', ['Overview', 'API keys', 'Team', 'Usage']],
     ['developer', ['Overview', 'Playground', 'Datasets', 'API keys', 'Team']],
     ['billing', ['Overview', 'Team', 'Usage', 'Billing']],
   ] as const)('shows a %s only the sections the role may use', async (role, expected) => {

@@ -4709,9 +4709,10 @@ export interface operations {
     listDatasets: {
         parameters: {
             query?: {
-                /** @description From the previous page’s `nextCursor`. */
-                cursor?: string;
+                /** @description Items per page. */
                 limit?: number;
+                /** @description The `nextCursor` of the previous page; omit for the first page. */
+                cursor?: string;
                 /** @description Only versions of this name. */
                 name?: string;
             };
