@@ -65,19 +65,23 @@ export class PublicApiModule implements OnModuleInit {
     private readonly usage: UsageService,
   ) {}
 
-  /** Logs every public-API answer (any status) once the caller is known, for the console's overview. */
+  /**
+   * Logs every public-API answer (any status) once the caller is known, for the console's overview. Reads of
+   * the usage report itself are left out, so watching the overview does not fill it with its own requests.
+   */
   onModuleInit(): void {
     const fastify = this.adapterHost.httpAdapter?.getInstance() as FastifyInstance | undefined;
     if (!fastify) return;
     fastify.addHook('onResponse', async (request: FastifyRequest, reply) => {
       const principal = principalOf(request);
-      if (!principal) return;
+      const route = request.routeOptions.url ?? request.url.split('?')[0] ?? '';
+      if (!principal || route.startsWith('/v1/usage')) return;
       try {
         await this.usage.logRequest({
           teamId: principal.teamId,
           apiKeyId: principal.keyId,
           method: request.method,
-          route: request.routeOptions.url ?? request.url.split('?')[0] ?? '',
+          route,
           status: reply.statusCode,
           durationMs: Math.round(reply.elapsedTime * 10) / 10,
           requestId: String(request.id),

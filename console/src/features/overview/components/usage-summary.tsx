@@ -75,17 +75,17 @@ export function UsageSummary() {
           <Table.Root size="1" aria-label="Recent requests">
             <Table.Header>
               <Table.Row>
-                <Table.ColumnHeaderCell>Endpoint</Table.ColumnHeaderCell>
+                <Table.ColumnHeaderCell>Recent request</Table.ColumnHeaderCell>
                 <Table.ColumnHeaderCell>Status</Table.ColumnHeaderCell>
                 <Table.ColumnHeaderCell justify="end">Time</Table.ColumnHeaderCell>
-                <Table.ColumnHeaderCell>Request id</Table.ColumnHeaderCell>
+                <Table.ColumnHeaderCell>Id</Table.ColumnHeaderCell>
               </Table.Row>
             </Table.Header>
             <Table.Body>
               {data.recentRequests.slice(0, 8).map((entry) => (
                 <Table.Row key={entry.requestId}>
                   <Table.Cell>
-                    <code className="ll-code">
+                    <code className="ll-code ll-nowrap">
                       {entry.method} {entry.route}
                     </code>
                   </Table.Cell>
@@ -94,12 +94,12 @@ export function UsageSummary() {
                       {entry.status}
                     </Badge>
                   </Table.Cell>
-                  <Table.Cell justify="end" className="ll-figure">
-                    {entry.durationMs.toFixed(1)} ms
+                  <Table.Cell justify="end" className="ll-figure ll-nowrap">
+                    {Math.round(entry.durationMs)} ms
                   </Table.Cell>
                   <Table.Cell>
                     <code className="ll-code" title={entry.requestId}>
-                      {entry.requestId.slice(0, 8)}
+                      {entry.requestId.slice(0, 6)}
                     </code>
                   </Table.Cell>
                 </Table.Row>
