@@ -1338,7 +1338,7 @@ export interface components {
             significanceLevel?: number;
             diagnosticOptions?: components["schemas"]["DiagnosticOptionsDto"];
             /**
-             * @description Also return per-row fitted values, residuals, standardised and studentised residuals, leverage and Cook’s distance.
+             * @description Also return per-row fitted values, residuals, standardised and studentised residuals, leverage and Cook’s distance (fits of up to 1,000,000 rows).
              * @default false
              */
             includeObservations?: boolean;

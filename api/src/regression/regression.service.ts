@@ -31,6 +31,8 @@ export type ResultKind = 'fit' | 'form-comparison' | 'prediction' | 'batch-fit' 
 
 /** Per-row arrays are kept in the stored copy only up to this many rows (answers always carry them). */
 export const STORED_OBSERVATIONS_LIMIT = 100_000;
+/** Per-row arrays in an answer: six numbers a row, so a million rows is already a large JSON answer. */
+export const OBSERVATIONS_ANSWER_LIMIT = 1_000_000;
 
 export interface CallContext {
   principal: PublicPrincipal;
@@ -78,6 +80,14 @@ export class RegressionService {
     const model = body.model;
     const requirements = this.requirements(model.response, model.predictors, model.weights, body.covariance);
     const { data, source } = await this.loadData(context, body.data, requirements, body.missingValues ?? 'reject');
+    if (body.includeObservations && data.rowsUsed > OBSERVATIONS_ANSWER_LIMIT) {
+      throw new ProblemException(
+        PROBLEM_TYPES.invalidRequest,
+        `Per-row results are returned for fits of up to ${OBSERVATIONS_ANSWER_LIMIT.toLocaleString('en')} rows; this fit uses ${data.rowsUsed.toLocaleString('en')}. ` +
+          'Leave includeObservations off (the diagnostics summarise the residuals).',
+        [{ pointer: '#/includeObservations', detail: `allowed up to ${OBSERVATIONS_ANSWER_LIMIT} rows` }],
+      );
+    }
     const engineInput = { ...fitInputOf(model, data, body.confidenceLevel), includeObservations: body.includeObservations ?? false };
     const covariance = this.covarianceOption(body.covariance, data);
     const diagnostics = body.diagnostics === 'none' ? [] : (body.diagnostics ?? 'all');

@@ -120,4 +120,8 @@ export class UsageService {
     );
     return rows.map((row) => ({ day: row.day, requests: Number(row.requests), errors: Number(row.errors) }));
   }
+
+  async forgetOldRequests(days: number): Promise<void> {
+    await this.sequelize.query('DELETE FROM request_log WHERE created_at < now() - make_interval(days => $1)', { bind: [days] });
+  }
 }

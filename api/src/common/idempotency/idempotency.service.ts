@@ -87,4 +87,9 @@ export class IdempotencyService {
       bind: [teamId, key],
     });
   }
+
+  /** Deletes records whose retention has ended. */
+  async forgetExpired(): Promise<void> {
+    await this.sequelize.query('DELETE FROM idempotency_records WHERE expires_at < now()');
+  }
 }

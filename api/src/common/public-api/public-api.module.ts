@@ -1,6 +1,6 @@
-import { Global, Module, OnModuleInit } from '@nestjs/common';
+import { Global, Module, OnModuleDestroy, OnModuleInit } from '@nestjs/common';
 import { HttpAdapterHost } from '@nestjs/core';
-import { getConnectionToken } from '@nestjs/sequelize';
+import { getConnectionToken, InjectConnection } from '@nestjs/sequelize';
 import { ThrottlerModule } from '@nestjs/throttler';
 import type { ExecutionContext } from '@nestjs/common';
 import type { FastifyInstance, FastifyRequest } from 'fastify';
@@ -16,6 +16,10 @@ import { PgThrottlerStorage } from '../rate-limit/pg-throttler.storage';
 import { limitsForPlan, RATE_LIMIT_WINDOW_MS } from '../rate-limit/plan-limits';
 import { PublicApiGuard } from './public-api.guard';
 import { principalOf } from './public-principal';
+
+const HOUSEKEEPING_INTERVAL_MS = 60 * 60 * 1000;
+/** The console's overview looks back 30 days; three months leaves room for support questions. */
+const REQUEST_LOG_RETENTION_DAYS = 90;
 
 function principalFrom(context: ExecutionContext) {
   return principalOf(context.switchToHttp().getRequest());
@@ -59,17 +63,27 @@ function principalFrom(context: ExecutionContext) {
   providers: [PublicApiGuard, ApiRateLimitGuard, IdempotencyService, IdempotentInterceptor],
   exports: [PublicApiGuard, ApiRateLimitGuard, IdempotencyService, IdempotentInterceptor, ApiKeysModule, AuthModule, UsageModule, ThrottlerModule],
 })
-export class PublicApiModule implements OnModuleInit {
+export class PublicApiModule implements OnModuleInit, OnModuleDestroy {
+  private housekeeping: NodeJS.Timeout | undefined;
+
   constructor(
     private readonly adapterHost: HttpAdapterHost,
     private readonly usage: UsageService,
+    private readonly idempotency: IdempotencyService,
+    @InjectConnection() private readonly sequelize: Sequelize,
   ) {}
+
+  onModuleDestroy(): void {
+    clearInterval(this.housekeeping);
+  }
 
   /**
    * Logs every public-API answer (any status) once the caller is known, for the console's overview. Reads of
    * the usage report itself are left out, so watching the overview does not fill it with its own requests.
    */
   onModuleInit(): void {
+    this.housekeeping = setInterval(() => void this.tidy(), HOUSEKEEPING_INTERVAL_MS);
+    this.housekeeping.unref();
     const fastify = this.adapterHost.httpAdapter?.getInstance() as FastifyInstance | undefined;
     if (!fastify) return;
     fastify.addHook('onResponse', async (request: FastifyRequest, reply) => {
@@ -90,5 +104,16 @@ export class PublicApiModule implements OnModuleInit {
         request.log.warn({ err: error }, 'request log write failed');
       }
     });
+  }
+
+  /** Forgets expired idempotency keys, old request-log lines and spent rate-limit windows (hourly). */
+  private async tidy(): Promise<void> {
+    try {
+      await this.idempotency.forgetExpired();
+      await this.usage.forgetOldRequests(REQUEST_LOG_RETENTION_DAYS);
+      await new PgThrottlerStorage(this.sequelize).forgetSpentWindows();
+    } catch {
+      // Housekeeping is retried on the next tick; a database hiccup must not disturb serving.
+    }
   }
 }

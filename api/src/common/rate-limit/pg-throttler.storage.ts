@@ -32,4 +32,9 @@ export class PgThrottlerStorage implements ThrottlerStorage {
     const isBlocked = totalHits > limit;
     return { totalHits, timeToExpire, isBlocked, timeToBlockExpire: isBlocked ? timeToExpire : 0 };
   }
+
+  /** Drops counters whose window ended over an hour ago (a new window starts a new row anyway). */
+  async forgetSpentWindows(): Promise<void> {
+    await this.sequelize.query("DELETE FROM rate_limit_counters WHERE window_ends_at < now() - interval '1 hour'");
+  }
 }

@@ -47,7 +47,8 @@ export class CreateFitDto extends CommonFitOptionsDto {
 
   @ApiPropertyOptional({
     default: false,
-    description: 'Also return per-row fitted values, residuals, standardised and studentised residuals, leverage and Cook’s distance.',
+    description:
+      'Also return per-row fitted values, residuals, standardised and studentised residuals, leverage and Cook’s distance (fits of up to 1,000,000 rows).',
   })
   @IsOptional()
   @IsBoolean()
