@@ -173,6 +173,28 @@ describe('solveLeastSquares', () => {
     }
   });
 
+  it('the tall path keeps agreeing when correlated predictors send it from the Gram factor to the Householder fold', () => {
+    const random = seededRandom(4242);
+    const n = 6000;
+    const base = Float64Array.from({ length: n }, () => random.normal());
+    // hedged_exposure is exposure plus 0.5% noise: the scaled design's condition number is in the hundreds,
+    // beyond the Gram path's limit of 1e2, so the Householder fold does the work.
+    const columns: Record<string, Float64Array> = {
+      exposure: base,
+      hedged_exposure: Float64Array.from(base, (value) => value + 0.005 * random.normal()),
+      fee: Float64Array.from({ length: n }, () => random.normal()),
+    };
+    const y = Float64Array.from({ length: n }, (_, i) => 2 * base[i]! - columns.fee![i]! + random.normal());
+    const tall = solveLeastSquares(design(columns, n), y, { method: 'tall-skinny' });
+    const householder = solveLeastSquares(design(columns, n), y, { method: 'householder-refined' });
+    expect(tall.conditionNumber).toBeGreaterThan(100);
+    for (let j = 0; j < 4; j++) {
+      const standardError = Math.sqrt((householder.unscaledCovariance[j]![j]! * householder.residualSumOfSquares) / (n - 4));
+      expect(Math.abs(tall.coefficients[j]! - householder.coefficients[j]!)).toBeLessThan(1e-11 * (Math.abs(householder.coefficients[j]!) + standardError));
+      expect(Math.abs(tall.unscaledCovariance[j]![j]! / householder.unscaledCovariance[j]![j]! - 1)).toBeLessThan(1e-10);
+    }
+  });
+
   it('chooses the tall-skinny path for large designs', () => {
     const n = 600000; // n * p = 2.4e6 design entries, above TALL_SKINNY_THRESHOLD
     const a = new Float64Array(n);

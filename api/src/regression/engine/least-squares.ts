@@ -91,7 +91,7 @@ export function solveLeastSquares(
   const method = options.method ?? (n * p > TALL_SKINNY_THRESHOLD ? 'tall-skinny' : 'householder-refined');
   if (method === 'tall-skinny') {
     const solution = solveTallSkinny(working, response, computeLeverage);
-    return { ...solution, rank: p, method: solution.refinementSteps > 0 ? 'householder-refined' : 'tall-skinny' };
+    return { ...solution, rank: p, method: solution.solver ?? 'householder-refined' };
   }
   const solution = solveRefinedQr(working, response, computeLeverage);
   return { ...solution, rank: p, method: 'householder-refined' };

@@ -46,6 +46,8 @@ export interface RefinedSolution {
   leverage?: Float64Array;
   conditionNumber: number;
   refinementSteps: number;
+  /** Which solver produced it (the tall path hands ill-conditioned problems to the refined one). */
+  solver?: 'householder-refined' | 'tall-skinny';
 }
 
 /** Refining p covariance columns costs about 10 n p^2 double-double operations: keep it bounded. */
