@@ -42,7 +42,7 @@ describe('analyseModel: coefficient table under the chosen covariance plus assum
     expect(white.regressors).not.toContain('sqrt(weight)*accounts');
   });
 
-  it('HC3 standard errors equal sqrt of the textbook (X\'X)^-1 X\' diag(e^2/(1-h)^2) X (X\'X)^-1 diagonal', () => {
+  it('HC3 standard errors equal sqrt of the direct (X\'X)^-1 X\' diag(e^2/(1-h)^2) X (X\'X)^-1 diagonal', () => {
     const result = analyseModel({ ...base, covariance: { type: 'hc3' }, diagnostics: [] });
     const model = fittedModel({ accounts: columns.accounts, arrears: columns.arrears }, columns.cost);
     const x = rowMatrix(model.design.columns);

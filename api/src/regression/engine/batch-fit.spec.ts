@@ -31,7 +31,7 @@ describe('batch fits against one shared factorisation', () => {
     });
   });
 
-  it('standard errors and R^2 match the textbook formulas (X\'X)^-1 s^2 with two shared predictors', () => {
+  it('standard errors and R^2 match the direct formulas (X\'X)^-1 s^2 with two shared predictors', () => {
     const source = seededSource(2);
     const n = 60;
     const rate = Array.from({ length: n }, () => 1000 + 10 * source.normal()); // large offset on purpose

@@ -1,7 +1,7 @@
 import { coefficientCovariance } from './covariance';
 import { coefficientInference } from './covariance-inference';
 import { seededSource } from './diagnostics/seeded-series';
-import { fittedModel, ones, textbookLeastSquares } from './diagnostics/test-support';
+import { fittedModel, ones, normalEquationsFit } from './diagnostics/test-support';
 
 // Invented scenario: interchange revenue against transaction count and average ticket, 23 days.
 function revenueDays(seed: number, n: number) {
@@ -13,12 +13,12 @@ function revenueDays(seed: number, n: number) {
 }
 
 describe('coefficient table and Wald test under a chosen covariance', () => {
-  it('classical: the Wald F for all slopes equals the textbook overall F = ((TSS - RSS)/q) / (RSS/(n - p))', () => {
+  it('classical: the Wald F for all slopes equals the direct overall F = ((TSS - RSS)/q) / (RSS/(n - p))', () => {
     const { count, ticket, revenue } = revenueDays(3, 23);
     const model = fittedModel({ count, ticket }, revenue);
     const inference = coefficientInference(model.design, model.solution.coefficients, coefficientCovariance(model), 0.95);
-    const textbook = textbookLeastSquares([ones(23), count, ticket], revenue);
-    const expectedF = ((textbook.centredTotal - textbook.rss) / 2) / (textbook.rss / 20);
+    const direct = normalEquationsFit([ones(23), count, ticket], revenue);
+    const expectedF = ((direct.centredTotal - direct.rss) / 2) / (direct.rss / 20);
     expect(inference.waldTest!.statistic).toBeCloseTo(expectedF, 8);
     expect(inference.waldTest!.numeratorDegreesOfFreedom).toBe(2);
     expect(inference.waldTest!.denominatorDegreesOfFreedom).toBe(20);

@@ -13,8 +13,8 @@ function corridorData(seed: number, n: number) {
   return { volume, volatility, spread };
 }
 
-/** Textbook sandwich (X'X)^-1 X' Omega X (X'X)^-1 with Omega = diag(omega), written with ml-matrix. */
-function textbookSandwich(x: Matrix, omega: number[]): Matrix {
+/** Direct sandwich (X'X)^-1 X' Omega X (X'X)^-1 with Omega = diag(omega), written with ml-matrix. */
+function directSandwich(x: Matrix, omega: number[]): Matrix {
   const bread = inverse(x.transpose().mmul(x));
   const meat = x.transpose().mmul(Matrix.diag(omega)).mmul(x);
   return bread.mmul(meat).mmul(bread);
@@ -44,21 +44,21 @@ describe('coefficient covariance: classical and heteroskedasticity-robust HC0-HC
   });
 
   it('HC0 (White 1980): (X\'X)^-1 X\' diag(e^2) X (X\'X)^-1', () => {
-    expectMatrixClose(coefficientCovariance(model, { type: 'hc0' }).matrix, textbookSandwich(x, e.map((v) => v * v)), 9);
+    expectMatrixClose(coefficientCovariance(model, { type: 'hc0' }).matrix, directSandwich(x, e.map((v) => v * v)), 9);
   });
 
   it('HC1 (MacKinnon & White 1985): HC0 times n / (n - p)', () => {
-    const expected = textbookSandwich(x, e.map((v) => v * v)).mul(n / (n - 3));
+    const expected = directSandwich(x, e.map((v) => v * v)).mul(n / (n - 3));
     const result = coefficientCovariance(model, { type: 'hc1' });
     expectMatrixClose(result.matrix, expected, 9);
     expect(result.description.smallSampleFactor).toBeCloseTo(40 / 37, 14);
   });
 
   it('HC2 and HC3 (MacKinnon & White 1985): e^2 / (1 - h) and e^2 / (1 - h)^2 with h from the explicit hat matrix', () => {
-    expectMatrixClose(coefficientCovariance(model, { type: 'hc2' }).matrix, textbookSandwich(x, e.map((v, i) => (v * v) / (1 - h[i]!))), 8);
+    expectMatrixClose(coefficientCovariance(model, { type: 'hc2' }).matrix, directSandwich(x, e.map((v, i) => (v * v) / (1 - h[i]!))), 8);
     expectMatrixClose(
       coefficientCovariance(model, { type: 'hc3' }).matrix,
-      textbookSandwich(x, e.map((v, i) => (v * v) / (1 - h[i]!) ** 2)),
+      directSandwich(x, e.map((v, i) => (v * v) / (1 - h[i]!) ** 2)),
       8,
     );
   });
@@ -107,7 +107,7 @@ describe('Newey-West HAC covariance (Newey & West 1987), Bartlett weights', () =
   });
 
   it('lag 0 reduces to HC0', () => {
-    expectMatrixClose(coefficientCovariance(model, { type: 'newey-west', lag: 0 }).matrix, textbookSandwich(x, e.map((v) => v * v)), 9);
+    expectMatrixClose(coefficientCovariance(model, { type: 'newey-west', lag: 0 }).matrix, directSandwich(x, e.map((v) => v * v)), 9);
   });
 
   it('automatic lag floor(4 (n/100)^(2/9)): 4 at n = 100 and 6 at n = 1000 (hand-computed)', () => {

@@ -10,10 +10,10 @@ function seatData(seed: number, n: number, logScale: boolean) {
 }
 
 describe('predictions with confidence and prediction intervals', () => {
-  it('straight line: textbook intervals yhat -/+ t s sqrt(1/n + (x0 - mean)^2 / Sxx) and sqrt(1 + ...)', () => {
+  it('straight line: direct intervals yhat -/+ t s sqrt(1/n + (x0 - mean)^2 / Sxx) and sqrt(1 + ...)', () => {
     const { seats, cost } = seatData(8, 12, false);
     const result = predict({ columns: { seats, cost }, response: 'cost', predictors: ['seats'], points: [[40], [95]] });
-    // Textbook straight-line formulas, written independently (two-pass sums).
+    // Direct straight-line formulas, written independently (two-pass sums).
     const n = 12;
     const meanX = seats.reduce((s, v) => s + v, 0) / n;
     const meanY = cost.reduce((s, v) => s + v, 0) / n;

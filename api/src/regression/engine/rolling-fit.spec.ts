@@ -18,7 +18,7 @@ function drifting(seed: number, n: number) {
   return { benchmark, volume, stock };
 }
 
-function textbookWindow(columns: number[][], y: number[]) {
+function directWindow(columns: number[][], y: number[]) {
   const x = new Matrix(y.map((_, i) => [1, ...columns.map((c) => c[i]!)]));
   const bread = inverse(x.transpose().mmul(x));
   const b = bread.mmul(x.transpose()).mmul(Matrix.columnVector(y));
@@ -29,14 +29,14 @@ function textbookWindow(columns: number[][], y: number[]) {
 }
 
 describe('rolling-window fits with updating sums', () => {
-  it('every window matches a textbook refit of that window (two predictors, window 40, step 3)', () => {
+  it('every window matches a direct refit of that window (two predictors, window 40, step 3)', () => {
     const { benchmark, volume, stock } = drifting(1, 400);
     const result = fitRolling({ columns: { benchmark, volume, stock }, response: 'stock', predictors: ['benchmark', 'volume'], window: 40, step: 3 });
     expect(result.windowCount).toBe(Math.floor((400 - 40) / 3) + 1);
     for (let w = 0; w < result.windowCount; w += 7) {
       const start = result.windowStart[w]!;
       const slice = (values: number[]) => values.slice(start, start + 40);
-      const reference = textbookWindow([slice(benchmark), slice(volume)], slice(stock));
+      const reference = directWindow([slice(benchmark), slice(volume)], slice(stock));
       result.coefficientPath.forEach((path, j) => {
         // Normal equations on both sides; 1e-6 relative.
         expect(path.estimates[w]! / reference.b[j]!).toBeCloseTo(1, 6);

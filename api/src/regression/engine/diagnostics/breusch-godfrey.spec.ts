@@ -1,7 +1,7 @@
 import { chiSquareSurvival } from '../distributions';
 import { breuschGodfreyTest } from './breusch-godfrey';
 import { seededSource } from './seeded-series';
-import { fittedModel, ones, textbookLeastSquares } from './test-support';
+import { fittedModel, ones, normalEquationsFit } from './test-support';
 
 // Invented scenario: weekly payment volume against a promotion index, synthetic seeded data.
 function volumeSeries(seed: number, n: number, rho: number) {
@@ -19,14 +19,14 @@ function volumeSeries(seed: number, n: number, rho: number) {
 }
 
 describe('Breusch-Godfrey test (Breusch 1978; Godfrey 1978)', () => {
-  it('equals n R^2 of e_t on X and zero-filled lagged residuals, recomputed by textbook OLS (lag 2)', () => {
+  it('equals n R^2 of e_t on X and zero-filled lagged residuals, recomputed by direct OLS (lag 2)', () => {
     const { promotion, volume } = volumeSeries(4, 40, 0.3);
     const result = breuschGodfreyTest(fittedModel({ promotion }, volume), 0.05, 2);
-    const base = textbookLeastSquares([ones(40), promotion], volume);
+    const base = normalEquationsFit([ones(40), promotion], volume);
     const e = base.residuals;
     const lag1 = e.map((_, t) => (t >= 1 ? e[t - 1]! : 0));
     const lag2 = e.map((_, t) => (t >= 2 ? e[t - 2]! : 0));
-    const auxiliary = textbookLeastSquares([ones(40), promotion, lag1, lag2], e);
+    const auxiliary = normalEquationsFit([ones(40), promotion, lag1, lag2], e);
     const total = e.reduce((sum, v) => sum + v * v, 0);
     const expected = 40 * (1 - auxiliary.rss / total);
     expect(result.statistic).toBeCloseTo(expected, 8);

@@ -1,7 +1,7 @@
 import { chiSquareSurvival } from '../distributions';
 import { breuschPaganTest } from './breusch-pagan';
 import { seededSource } from './seeded-series';
-import { fittedModel, ones, textbookLeastSquares } from './test-support';
+import { fittedModel, ones, normalEquationsFit } from './test-support';
 
 // Invented scenario: daily settlement amount against merchant count, synthetic seeded data.
 function settlementData(seed: number, n: number, growingVariance: boolean) {
@@ -20,13 +20,13 @@ function settlementData(seed: number, n: number, growingVariance: boolean) {
 }
 
 describe('Breusch-Pagan test', () => {
-  it('studentised (Koenker 1981): equals n R^2 of e^2 on the regressors, recomputed by textbook OLS', () => {
+  it('studentised (Koenker 1981): equals n R^2 of e^2 on the regressors, recomputed by direct OLS', () => {
     const { merchants, amount, region } = settlementData(7, 50, true);
     const model = fittedModel({ merchants, region }, amount);
     const result = breuschPaganTest(model, 0.05);
-    const base = textbookLeastSquares([ones(50), merchants, region], amount);
+    const base = normalEquationsFit([ones(50), merchants, region], amount);
     const squares = base.residuals.map((e) => e * e);
-    const auxiliary = textbookLeastSquares([ones(50), merchants, region], squares);
+    const auxiliary = normalEquationsFit([ones(50), merchants, region], squares);
     const expected = 50 * (1 - auxiliary.rss / auxiliary.centredTotal);
     expect(result.statistic).toBeCloseTo(expected, 8);
     expect(result.degreesOfFreedom).toBe(2);
@@ -38,10 +38,10 @@ describe('Breusch-Pagan test', () => {
     const { merchants, amount } = settlementData(8, 40, true);
     const model = fittedModel({ merchants }, amount);
     const result = breuschPaganTest(model, 0.05, 'original');
-    const base = textbookLeastSquares([ones(40), merchants], amount);
+    const base = normalEquationsFit([ones(40), merchants], amount);
     const sigma2 = base.rss / 40;
     const g = base.residuals.map((e) => (e * e) / sigma2);
-    const auxiliary = textbookLeastSquares([ones(40), merchants], g);
+    const auxiliary = normalEquationsFit([ones(40), merchants], g);
     expect(result.statistic).toBeCloseTo((auxiliary.centredTotal - auxiliary.rss) / 2, 8);
     expect(result.degreesOfFreedom).toBe(1);
   });

@@ -1,7 +1,7 @@
 import { Matrix } from 'ml-matrix';
 import { durbinWatsonLowerTail, durbinWatsonNullMoments, durbinWatsonStatistic, durbinWatsonTest } from './durbin-watson';
 import { seededSource } from './seeded-series';
-import { fittedModel, ones, rowMatrix, textbookLeastSquares } from './test-support';
+import { fittedModel, ones, rowMatrix, normalEquationsFit } from './test-support';
 
 // Invented scenario: monthly chargeback rate against a month index, synthetic seeded data.
 function trendDesign(n: number) {
@@ -31,13 +31,13 @@ describe('Durbin-Watson statistic and its null distribution', () => {
     const source = seededSource(5);
     const spread = Array.from({ length: n }, () => source.uniform());
     const columns = [ones(n), trendDesign(n).month.map(Number), spread];
-    const base = textbookLeastSquares(columns, spread.map((v, i) => v + i));
+    const base = normalEquationsFit(columns, spread.map((v, i) => v + i));
     const moments = durbinWatsonNullMoments(
       columns.map((c) => Float64Array.from(c)),
       base.inverseGram.to2DArray().map((row) => Float64Array.from(row)),
       n,
     );
-    // Textbook construction: M = I - X (X'X)^-1 X', A tridiagonal (1, 2, ..., 2, 1; -1 off the diagonal).
+    // Direct construction: M = I - X (X'X)^-1 X', A tridiagonal (1, 2, ..., 2, 1; -1 off the diagonal).
     const x = rowMatrix(columns);
     const m = Matrix.eye(n).sub(x.mmul(base.inverseGram).mmul(x.transpose()));
     const a = Matrix.zeros(n, n);
@@ -77,7 +77,7 @@ describe('Durbin-Watson statistic and its null distribution', () => {
     const draws: number[] = [];
     for (let r = 0; r < 4000; r++) {
       const y = month.map(() => source.normal());
-      draws.push(durbinWatsonStatistic(textbookLeastSquares([ones(n), month], y).residuals));
+      draws.push(durbinWatsonStatistic(normalEquationsFit([ones(n), month], y).residuals));
     }
     for (const point of [1.4, 1.7, 2.0, 2.4]) {
       const empirical = draws.filter((d) => d <= point).length / draws.length;

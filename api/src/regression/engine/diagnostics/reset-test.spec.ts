@@ -1,7 +1,7 @@
 import { fisherFSurvival } from '../distributions';
 import { resetTest } from './reset-test';
 import { seededSource } from './seeded-series';
-import { fittedModel, ones, textbookLeastSquares } from './test-support';
+import { fittedModel, ones, normalEquationsFit } from './test-support';
 
 // Invented scenario: card-processing fee (response) against ticket size, synthetic seeded data.
 function ticketData(seed: number, n: number, curvature: number) {
@@ -17,13 +17,13 @@ function ticketData(seed: number, n: number, curvature: number) {
 }
 
 describe('RESET test (Ramsey 1969), F form with fitted powers 2..3', () => {
-  it('matches the F statistic recomputed from two textbook normal-equation fits', () => {
+  it('matches the F statistic recomputed from two direct normal-equation fits', () => {
     const { ticket, fee } = ticketData(11, 60, 0.02);
     const model = fittedModel({ ticket }, fee);
     const result = resetTest(model, 0.05);
-    const restricted = textbookLeastSquares([ones(60), ticket], fee);
+    const restricted = normalEquationsFit([ones(60), ticket], fee);
     const fitted = fee.map((value, i) => value - restricted.residuals[i]!);
-    const augmented = textbookLeastSquares(
+    const augmented = normalEquationsFit(
       [ones(60), ticket, fitted.map((v) => v ** 2), fitted.map((v) => v ** 3)],
       fee,
     );

@@ -1,6 +1,6 @@
 /**
  * Shared pieces of the diagnostics and covariance tests: building a fitted model from plain columns, and
- * textbook least squares written independently with ml-matrix (normal equations via a matrix inverse),
+ * direct least squares written independently with ml-matrix (normal equations via a matrix inverse),
  * so that checks do not reuse the engine's own solver for their expected values.
  */
 
@@ -34,8 +34,8 @@ export function rowMatrix(columns: ArrayLike<number>[]): Matrix {
   return new Matrix(rows);
 }
 
-/** Textbook OLS: b = (X'X)^-1 X'y, residual sum of squares and centred/raw totals. */
-export function textbookLeastSquares(columns: ArrayLike<number>[], y: ArrayLike<number>) {
+/** Direct OLS: b = (X'X)^-1 X'y, residual sum of squares and centred/raw totals. */
+export function normalEquationsFit(columns: ArrayLike<number>[], y: ArrayLike<number>) {
   const x = rowMatrix(columns);
   const yColumn = Matrix.columnVector(Array.from(y));
   const inverseGram = inverse(x.transpose().mmul(x));

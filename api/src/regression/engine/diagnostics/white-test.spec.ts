@@ -1,6 +1,6 @@
 import { whiteTest } from './white-test';
 import { seededSource } from './seeded-series';
-import { fittedModel, ones, textbookLeastSquares } from './test-support';
+import { fittedModel, ones, normalEquationsFit } from './test-support';
 
 // Invented scenario: loan loss amount against exposure and tenor, synthetic seeded data.
 function lossData(seed: number, n: number) {
@@ -22,13 +22,13 @@ function lossData(seed: number, n: number) {
 }
 
 describe("White's test (White 1980): n R^2 on regressors, squares and cross-products", () => {
-  it('matches a textbook auxiliary regression with 5 regressors for two predictors (df = 5)', () => {
+  it('matches a direct auxiliary regression with 5 regressors for two predictors (df = 5)', () => {
     const { exposure, tenor, loss } = lossData(21, 60);
     const model = fittedModel({ exposure, tenor }, loss);
     const result = whiteTest(model, 0.05);
-    const base = textbookLeastSquares([ones(60), exposure, tenor], loss);
+    const base = normalEquationsFit([ones(60), exposure, tenor], loss);
     const squares = base.residuals.map((e) => e * e);
-    const auxiliary = textbookLeastSquares(
+    const auxiliary = normalEquationsFit(
       [ones(60), exposure, tenor, exposure.map((v) => v * v), exposure.map((v, i) => v * tenor[i]!), tenor.map((v) => v * v)],
       squares,
     );
