@@ -1,45 +1,14 @@
 import { NestFastifyApplication } from '@nestjs/platform-fastify';
-import { ChildProcess, spawn } from 'node:child_process';
-import { createServer } from 'node:net';
-import { join } from 'node:path';
+import { ChildProcess } from 'node:child_process';
 import { cleanUp } from './support/accounts';
 import { KeyedTeam, teamWithKey } from './support/public-api';
+import { freePort, startServer } from './support/api-process';
 import { createTestApp } from './support/test-app';
 
 /**
  * Two API processes (the compiled server, as deployed) against one database: the per-key quota of the
  * "trial" plan (5 requests per minute, plan-limits.ts) must hold across both.
  */
-const MAIN = join(__dirname, '..', 'dist', 'main.js');
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const server = createServer();
-    server.listen(0, '127.0.0.1', () => {
-      const address = server.address();
-      server.close(() => resolve(typeof address === 'object' && address ? address.port : 0));
-    });
-  });
-}
-
-async function startServer(port: number): Promise<ChildProcess> {
-  const child = spawn(process.execPath, [MAIN], {
-    env: { ...process.env, LEASTLINE_PORT: String(port), LEASTLINE_LOG_LEVEL: 'silent', LEASTLINE_CONSOLE_DIST: '' },
-    stdio: 'ignore',
-  });
-  const deadline = Date.now() + 20_000;
-  while (Date.now() < deadline) {
-    try {
-      if ((await fetch(`http://127.0.0.1:${port}/v1/health`)).ok) return child;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-  child.kill();
-  throw new Error(`server on ${port} did not start`);
-}
-
 describe('rate limits shared by two API processes', () => {
   let app: NestFastifyApplication;
   let team: KeyedTeam;

@@ -9,6 +9,7 @@ import { ApiKeyScope } from './api-key-scopes';
 import { ApiPrincipal } from './api-principal';
 import { parseApiKey, secretMatches } from './key-format';
 import { ApiKey } from './models/api-key.model';
+import { KeyCacheInvalidation } from './key-cache-invalidation.service';
 import { TtlCache } from './ttl-cache';
 
 interface CachedKey {
@@ -32,8 +33,8 @@ const MAX_CACHED_KEYS = 10_000;
  * rotated out — anyone else learns only "not valid".
  *
  * The cache holds a row for LEASTLINE_API_KEY_CACHE_TTL_MS (30 s by default). Revocation, rotation, plan
- * changes and team deletion evict the entries in this process at once; another API process notices within
- * the TTL, which is therefore the bound on how long a revoked key can still work elsewhere.
+ * changes and team deletion evict the entries at once in every API process (KeyCacheInvalidation: NOTIFY /
+ * LISTEN); the TTL only bounds staleness while a process's listening connection is down.
  */
 @Injectable()
 export class ApiKeyAuthenticator {
@@ -43,8 +44,13 @@ export class ApiKeyAuthenticator {
     @InjectModel(ApiKey) private readonly keys: typeof ApiKey,
     private readonly teamAccess: TeamAccessService,
     @Inject(securityConfig.KEY) private readonly security: ConfigType<typeof securityConfig>,
+    private readonly invalidation: KeyCacheInvalidation,
   ) {
     this.cache = new TtlCache(security.apiKeyCacheTtlMs, MAX_CACHED_KEYS);
+    invalidation.onEviction((eviction) => {
+      if (eviction.kind === 'key') this.cache.delete(eviction.publicId);
+      else this.cache.deleteWhere((entry) => entry !== UNKNOWN && entry.teamId === eviction.teamId);
+    });
   }
 
   async authenticate(presented: string): Promise<ApiPrincipal> {
@@ -73,14 +79,14 @@ export class ApiKeyAuthenticator {
     return { teamId: record.teamId, keyId: record.id, scopes: [...record.scopes], teamPlan: record.teamPlan };
   }
 
-  /** Evicts one key (by its public key id) after revocation or rotation. */
-  forgetKey(publicId: string): void {
-    this.cache.delete(publicId);
+  /** Evicts one key (by its public key id) after revocation or rotation, in every API process. */
+  forgetKey(publicId: string): Promise<void> {
+    return this.invalidation.publish({ kind: 'key', publicId });
   }
 
-  /** Evicts every key of a team after a plan change or the team's deletion. */
-  forgetTeam(teamId: string): void {
-    this.cache.deleteWhere((entry) => entry !== UNKNOWN && entry.teamId === teamId);
+  /** Evicts every key of a team after a plan change or the team's deletion, in every API process. */
+  forgetTeam(teamId: string): Promise<void> {
+    return this.invalidation.publish({ kind: 'team', teamId });
   }
 
   private async lookup(publicId: string): Promise<CachedKey | typeof UNKNOWN> {

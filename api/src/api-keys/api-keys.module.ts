@@ -10,6 +10,7 @@ import { BearerKeyStrategy, HeaderKeyStrategy } from './api-key.strategies';
 import { ApiKeysController } from './api-keys.controller';
 import { ApiKeysService } from './api-keys.service';
 import { CurrentApiKeyController } from './current-api-key.controller';
+import { KeyCacheInvalidation } from './key-cache-invalidation.service';
 import { ApiKey } from './models/api-key.model';
 
 /**
@@ -20,7 +21,7 @@ import { ApiKey } from './models/api-key.model';
 @Module({
   imports: [SequelizeModule.forFeature([ApiKey]), PassportModule, AuthModule, MailModule],
   controllers: [ApiKeysController, CurrentApiKeyController],
-  providers: [ApiKeysService, ApiKeyAuthenticator, ApiKeyUsageRecorder, BearerKeyStrategy, HeaderKeyStrategy, ApiKeyGuard],
+  providers: [ApiKeysService, ApiKeyAuthenticator, KeyCacheInvalidation, ApiKeyUsageRecorder, BearerKeyStrategy, HeaderKeyStrategy, ApiKeyGuard],
   exports: [ApiKeyAuthenticator, ApiKeyUsageRecorder, ApiKeyGuard],
 })
 export class ApiKeysModule {}

@@ -113,7 +113,7 @@ export class ApiKeysService {
       for (const recipient of recipients) await this.mail.enqueue(recipient, notice, transaction);
       return { apiKey: toDto(row), plaintextKey: fullKey, oldPublicId: old.publicId };
     });
-    this.authenticator.forgetKey(result.oldPublicId);
+    await this.authenticator.forgetKey(result.oldPublicId);
     return { apiKey: result.apiKey, plaintextKey: result.plaintextKey };
   }
 
@@ -129,7 +129,7 @@ export class ApiKeysService {
       );
       return key.publicId;
     });
-    this.authenticator.forgetKey(publicId);
+    await this.authenticator.forgetKey(publicId);
   }
 
   private async insertKey(

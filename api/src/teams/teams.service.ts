@@ -103,15 +103,15 @@ export class TeamsService {
       }
       return current;
     });
-    // Cached keys carry the plan; other processes pick the new one up within the key-cache TTL.
-    this.apiKeys.forgetTeam(team.teamId);
+    // Cached keys carry the plan: every API process drops this team's entries.
+    await this.apiKeys.forgetTeam(team.teamId);
     return toDto(row, team.role);
   }
 
   /** Deletes the team and, by cascade, its memberships, invitations, keys and audit log. */
   async delete(team: TeamAccess): Promise<void> {
     await this.teams.destroy({ where: { id: team.teamId } });
-    this.apiKeys.forgetTeam(team.teamId);
+    await this.apiKeys.forgetTeam(team.teamId);
   }
 
   /** The new owner must already be a member; the previous owner stays on as admin. */
