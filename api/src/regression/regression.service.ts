@@ -15,11 +15,10 @@ import { CreatePredictionDto } from './dto/create-prediction.dto';
 import { ComparedModelDto } from './dto/compare-forms.dto';
 import { CovarianceChoiceDto, DataSourceDto, ModelSpecDto } from './dto/model-request.dto';
 import { CreateRollingFitDto } from './dto/rolling-fit.dto';
-import { analyseModelWithSnapshot, fitBatch, fitRolling, predictAt, predictionModelFor, PredictionModel } from './engine/analyse-model';
+import { fitAndAnalyse, fitBatch, fitRolling, predictAt, predictionModelFor, PredictionModel } from './engine/analyse-model';
 import type { CovarianceOption } from './engine/analyse-model';
 import { compareForms } from './engine/compare-forms';
 import { FitInput } from './engine/fit-input';
-import { fitModel } from './engine/fit-model';
 import { ENGINE_VERSION } from './engine/version';
 import { runEngine } from './engine-problem';
 import { inputHash } from './input-hash';
@@ -91,10 +90,9 @@ export class RegressionService {
     const engineInput = { ...fitInputOf(model, data, body.confidenceLevel), includeObservations: body.includeObservations ?? false };
     const covariance = this.covarianceOption(body.covariance, data);
     const diagnostics = body.diagnostics === 'none' ? [] : (body.diagnostics ?? 'all');
-    const fit = runEngine(() => fitModel(engineInput), DATA_POINTER);
-    const { analysis, snapshot } = runEngine(
+    const { fit, analysis, snapshot } = runEngine(
       () =>
-        analyseModelWithSnapshot({
+        fitAndAnalyse({
           ...engineInput,
           ...(covariance ? { covariance } : {}),
           diagnostics,

@@ -18,7 +18,8 @@
  */
 
 import { FitInput } from './fit-input';
-import { prepareModel } from './analyse-model-design';
+import { PreparedModel, prepareModel } from './analyse-model-design';
+import { FitResult, fitValidated } from './fit-model';
 import {
   DiagnosticOptions,
   DiagnosticsBlock,
@@ -73,7 +74,7 @@ export interface PredictionInput extends FitInput {
 }
 
 export function analyseModel(input: AnalysisInput): AnalysisResult {
-  return analyseModelWithSnapshot(input).analysis;
+  return analyse(input).analysis;
 }
 
 export interface PredictionSnapshot {
@@ -83,17 +84,24 @@ export interface PredictionSnapshot {
 }
 
 /**
- * analyseModel plus the prediction snapshot of the same solve (one factorisation for both), for callers
- * that store a fit and predict from it later.
+ * The fit (classical table, ANOVA, goodness of fit, forms), the analysis under the chosen covariance with
+ * the checks, and the prediction snapshot, all from one least-squares solve.
  */
-export function analyseModelWithSnapshot(input: AnalysisInput): { analysis: AnalysisResult; snapshot: PredictionSnapshot } {
+export function fitAndAnalyse(input: AnalysisInput): { fit: FitResult; analysis: AnalysisResult; snapshot: PredictionSnapshot } {
+  const { analysis, snapshot, prepared } = analyse(input);
+  return { fit: fitValidated({ ...prepared.input, includeObservations: input.includeObservations ?? false }, prepared.model.solution), analysis, snapshot };
+}
+
+function analyse(input: AnalysisInput): { analysis: AnalysisResult; snapshot: PredictionSnapshot; prepared: PreparedModel } {
   const significanceLevel = validateSignificanceLevel(input.significanceLevel);
   const names = validateDiagnosticNames(input.diagnostics);
   const diagnosticOptions = validateDiagnosticOptions(input.diagnosticOptions);
-  const { input: validated, model } = prepareModel(input);
+  const prepared = prepareModel(input);
+  const { input: validated, model } = prepared;
   const covariance = coefficientCovariance(model, resolveCovariance(input, model));
   const inference = coefficientInference(model.design, model.solution.coefficients, covariance, validated.confidenceLevel);
   return {
+    prepared,
     analysis: {
       ...inference,
       observationCount: model.design.n,

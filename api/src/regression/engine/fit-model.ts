@@ -26,7 +26,7 @@ import {
 } from './functional-forms';
 import { influenceMeasures } from './influence';
 import { InformationCriteria, informationCriteria, logJacobianOfLogResponse } from './information-criteria';
-import { INTERCEPT_NAME, LeastSquaresMethod, solveLeastSquares } from './least-squares';
+import { INTERCEPT_NAME, LeastSquaresMethod, LeastSquaresSolution, solveLeastSquares } from './least-squares';
 import { fitSimpleLine, simpleLineObservations } from './simple-regression';
 import { backTransform, smearingFactor } from './smearing';
 import { ENGINE_VERSION } from './version';
@@ -99,8 +99,13 @@ export function fitModel(input: FitInput): FitResult {
   return fitValidated(validateFitInput(input, { deferFiniteCheck: true }));
 }
 
-/** Fit with already-validated input (compare-forms.ts reuses one validation for all forms). */
-export function fitValidated(input: ValidatedInput): FitResult {
+/**
+ * Fit with already-validated input (compare-forms.ts reuses one validation for all forms). `presolved`
+ * is the least-squares solution of exactly this model's design (intercept first, then the predictors
+ * after the form's transforms, with the input's weights), when the caller already has it: the fit then
+ * reuses it instead of solving again (analyse-model.ts shares one solve between the fit and its checks).
+ */
+export function fitValidated(input: ValidatedInput, presolved?: LeastSquaresSolution): FitResult {
   const { n, form, intercept, confidenceLevel } = input;
   const responseTransform = responseTransformation(form);
   const predictorTransform = predictorTransformation(form);
@@ -108,7 +113,7 @@ export function fitValidated(input: ValidatedInput): FitResult {
   const names = input.predictors.map((p) => p.name);
   const terms = intercept ? [INTERCEPT_NAME, ...names] : names;
   const p = terms.length;
-  const straightLine = names.length === 1 && intercept && !weights;
+  const straightLine = names.length === 1 && intercept && !weights && presolved === undefined;
   // The straight-line pass checks finiteness as it goes; every other route checks first.
   if (!straightLine) for (const column of [input.response, ...input.predictors]) ensureFinite(column);
   const y = transformColumn(input.response.name, input.response.values, responseTransform);
@@ -117,7 +122,7 @@ export function fitValidated(input: ValidatedInput): FitResult {
   const core =
     (straightLine &&
       solveStraightLine(xs[0] as Float64Array, y, names[0] as string, input.response.name, input.includeObservations)) ||
-    solveGeneral(xs, names, y, intercept, weights, input.includeObservations);
+    solveGeneral(xs, names, y, intercept, weights, input.includeObservations, presolved);
 
   const fit = goodnessOfFit(n, p, intercept, core.residualSumOfSquares, core.totalSumOfSquares, input.response.name);
   const residualMeanSquare = fit.anova.residual.meanSquare;
@@ -219,15 +224,17 @@ function solveGeneral(
   intercept: boolean,
   weights: Float64Array | null,
   includeObservations: boolean,
+  presolved?: LeastSquaresSolution,
 ): CoreSolution {
   const n = y.length;
   const columns = intercept ? [new Float64Array(n).fill(1), ...xs] : xs;
   const columnNames = intercept ? [INTERCEPT_NAME, ...names] : names;
-  const solution = solveLeastSquares(
-    { names: columnNames, columns, n, hasIntercept: intercept },
-    y,
-    { ...(weights ? { weights } : {}), computeLeverage: includeObservations },
-  );
+  const solution =
+    presolved ??
+    solveLeastSquares({ names: columnNames, columns, n, hasIntercept: intercept }, y, {
+      ...(weights ? { weights } : {}),
+      computeLeverage: includeObservations,
+    });
   const leverage = solution.leverage;
   return {
     coefficients: solution.coefficients,

@@ -18,7 +18,7 @@ export { solveLeastSquares, INTERCEPT_NAME } from './least-squares';
 export type { DesignMatrix, LeastSquaresSolution, LeastSquaresOptions, LeastSquaresMethod } from './least-squares';
 export { powerTerms } from './polynomial-terms';
 export * as distributions from './distributions';
-export { analyseModel, predict, fitBatch, fitRolling } from './analyse-model';
+export { analyseModel, fitAndAnalyse, predict, fitBatch, fitRolling } from './analyse-model';
 export type {
   AnalysisInput,
   AnalysisResult,
