@@ -19,6 +19,7 @@
  */
 
 import { EngineError } from './errors';
+import { DoubleDoubleAccumulator } from './double-double';
 import {
   applyQ,
   applyQTranspose,
@@ -458,55 +459,29 @@ export function mappedCovariance(
   const tLo = new Float64Array(p * p);
   for (let a = 0; a < p; a++) {
     for (let b = 0; b < p; b++) {
-      let sumHi = 0;
-      let sumLo = 0;
+      const sum = new DoubleDoubleAccumulator();
       for (let k = 0; k < p; k++) {
         const m = map[a * p + k]!;
         if (m === 0) continue;
-        const cHi = gramInverseHi[k * p + b]!;
-        const cLo = gramInverseLo ? gramInverseLo[k * p + b]! : 0;
-        const product = m * cHi;
-        let t = SPLITTER * m;
-        const mH = t - (t - m);
-        const mL = m - mH;
-        t = SPLITTER * cHi;
-        const cH = t - (t - cHi);
-        const cL = cHi - cH;
-        const productError = mH * cH - product + mH * cL + mL * cH + mL * cL + m * cLo;
-        const total = sumHi + product;
-        const bb = total - sumHi;
-        sumLo += sumHi - (total - bb) + (product - bb) + productError;
-        sumHi = total;
+        sum.addProduct(m, gramInverseHi[k * p + b]!);
+        if (gramInverseLo) sum.lo += m * gramInverseLo[k * p + b]!;
       }
-      tHi[a * p + b] = sumHi;
-      tLo[a * p + b] = sumLo;
+      tHi[a * p + b] = sum.hi;
+      tLo[a * p + b] = sum.lo;
     }
   }
   const rows: Float64Array[] = [];
   for (let a = 0; a < p; a++) rows.push(new Float64Array(p));
   for (let a = 0; a < p; a++) {
     for (let b = a; b < p; b++) {
-      let sumHi = 0;
-      let sumLo = 0;
+      const sum = new DoubleDoubleAccumulator();
       for (let k = 0; k < p; k++) {
         const m = map[b * p + k]!;
         if (m === 0) continue;
-        const vHi = tHi[a * p + k]!;
-        const vLo = tLo[a * p + k]!;
-        const product = m * vHi;
-        let t = SPLITTER * m;
-        const mH = t - (t - m);
-        const mL = m - mH;
-        t = SPLITTER * vHi;
-        const vH = t - (t - vHi);
-        const vL = vHi - vH;
-        const productError = mH * vH - product + mH * vL + mL * vH + mL * vL + m * vLo;
-        const total = sumHi + product;
-        const bb = total - sumHi;
-        sumLo += sumHi - (total - bb) + (product - bb) + productError;
-        sumHi = total;
+        sum.addProduct(m, tHi[a * p + k]!);
+        sum.lo += m * tLo[a * p + k]!;
       }
-      const value = sumHi + sumLo;
+      const value = sum.value();
       (rows[a] as Float64Array)[b] = value;
       (rows[b] as Float64Array)[a] = value;
     }
