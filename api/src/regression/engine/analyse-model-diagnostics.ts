@@ -134,17 +134,21 @@ export function runDiagnostics(
     },
   };
   for (const name of names) {
-    (block as Record<string, unknown>)[diagnosticResultKey(name)] = runOne(runners[name] as () => object);
+    (block as Record<string, unknown>)[diagnosticResultKey(name)] = runOne(runners[name] as () => object, options);
   }
   return block;
 }
 
-function runOne<T>(runner: () => T): DiagnosticEntry<T> {
+function runOne<T>(runner: () => T, options: DiagnosticOptions): DiagnosticEntry<T> {
   try {
     return { status: 'computed', ...runner() };
   } catch (error) {
-    // Only errors about the check itself are reported in place; a bad option is the caller's to fix.
-    if (error instanceof AnalysisError && error.field?.startsWith('diagnosticOptions.')) throw error;
+    // A check that cannot run with its defaults (a default lag longer than a tiny sample allows) is
+    // reported in place; an option the caller set explicitly is the caller's to fix, so it fails the call.
+    if (error instanceof AnalysisError && error.field?.startsWith('diagnosticOptions.')) {
+      const option = error.field.slice('diagnosticOptions.'.length) as keyof DiagnosticOptions;
+      if (options[option] !== undefined) throw error;
+    }
     if (error instanceof EngineError) {
       return {
         status: 'not-defined',

@@ -39,6 +39,7 @@ export { predictAt } from './prediction';
 export type { PredictionModel } from './prediction';
 import { responseTransformation } from './functional-forms';
 import { smearingFactor } from './smearing';
+import { workingPredictionModel } from './working-coordinates';
 
 export { fitBatch } from './batch-fit';
 export type { BatchFitInput, BatchFitResult } from './batch-fit';
@@ -139,6 +140,7 @@ function snapshotOf(
       hasIntercept: validated.intercept,
       coefficients: model.solution.coefficients,
       covariance: covariance.matrix,
+      ...(covariance.workingMatrix ? { working: workingPredictionModel(model.solution, covariance.workingMatrix) } : {}),
       residualVariance: model.solution.residualSumOfSquares / (n - p),
       degreesOfFreedom: covariance.description.inferenceDegreesOfFreedom,
       form: validated.form,

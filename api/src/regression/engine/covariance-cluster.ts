@@ -11,7 +11,8 @@
 
 import { AnalysisError } from './diagnostics/analysis-error';
 import { SquareMatrix } from './diagnostics/small-matrix';
-import { weightedOuterSum } from './covariance-scores';
+import { ddAdd, twoProduct } from './double-double';
+import { OuterSum } from './working-coordinates';
 
 export type GroupLabel = string | number;
 
@@ -51,17 +52,27 @@ export function indexGroups(groups: ArrayLike<GroupLabel>, n: number): { index: 
   return { index, count: seen.size };
 }
 
-/** sum_g s_g s_g' from score rows. */
-export function clusterMeat(scores: Float64Array[], index: Int32Array, count: number): SquareMatrix {
-  const p = scores[0]?.length ?? 0;
-  const sums: Float64Array[] = [];
-  for (let g = 0; g < count; g++) sums.push(new Float64Array(p));
-  for (let i = 0; i < scores.length; i++) {
-    const target = sums[index[i]!] as Float64Array;
-    const u = scores[i] as Float64Array;
-    for (let j = 0; j < p; j++) target[j]! += u[j]!;
+/** C [sum_g s_g s_g'] C with C s_g = sum_{i in g} f_i a_i, the group sums kept in double-double. */
+export function clusterMeat(rows: Float64Array[], scores: Float64Array, index: Int32Array, count: number): SquareMatrix {
+  const p = rows[0]?.length ?? 0;
+  const hi = new Float64Array(count * p);
+  const lo = new Float64Array(count * p);
+  for (let i = 0; i < rows.length; i++) {
+    const row = rows[i] as Float64Array;
+    const offset = index[i]! * p;
+    const f = scores[i]!;
+    for (let j = 0; j < p; j++) {
+      const product = twoProduct(f, row[j]!);
+      const sum = ddAdd(hi[offset + j]!, lo[offset + j]!, product.hi, product.lo);
+      hi[offset + j] = sum.hi;
+      lo[offset + j] = sum.lo;
+    }
   }
-  return weightedOuterSum(sums, null);
+  const total = new OuterSum(p);
+  for (let g = 0; g < count; g++) {
+    total.addSquare(Float64Array.from({ length: p }, (_, j) => hi[g * p + j]! + lo[g * p + j]!), 1);
+  }
+  return total.matrix();
 }
 
 export function clusterFactor(groupCount: number, n: number, p: number): number {

@@ -12,8 +12,8 @@
  */
 
 import { AnalysisError } from './diagnostics/analysis-error';
-import { SquareMatrix, zeroMatrix } from './diagnostics/small-matrix';
-import { weightedOuterSum } from './covariance-scores';
+import { SquareMatrix } from './diagnostics/small-matrix';
+import { OuterSum } from './working-coordinates';
 
 export function automaticNeweyWestLag(n: number): number {
   return Math.floor(4 * Math.pow(n / 100, 2 / 9));
@@ -36,26 +36,20 @@ export function resolveNeweyWestLag(lag: number | 'automatic' | undefined, n: nu
   return { lag, rule: 'fixed' };
 }
 
-/** The HAC meat S from score rows u_t in time order. */
-export function neweyWestMeat(scores: Float64Array[], lag: number): SquareMatrix {
-  const n = scores.length;
-  const p = scores[0]?.length ?? 0;
-  const meat = weightedOuterSum(scores, null);
+/**
+ * C S C for the HAC meat S, from a_t = C x_t and f_t = w_t e_t in time order:
+ *   sum_t f_t^2 a_t a_t' + sum_{l=1..L} w_l sum_{t>l} f_t f_{t-l} (a_t a_{t-l}' + a_{t-l} a_t').
+ */
+export function neweyWestMeat(rows: Float64Array[], scores: Float64Array, lag: number): SquareMatrix {
+  const n = rows.length;
+  const p = rows[0]?.length ?? 0;
+  const sum = new OuterSum(p);
+  for (let t = 0; t < n; t++) sum.addSquare(rows[t] as Float64Array, scores[t]! * scores[t]!);
   for (let l = 1; l <= lag; l++) {
     const weight = 1 - l / (lag + 1);
-    const cross = zeroMatrix(p);
     for (let t = l; t < n; t++) {
-      const current = scores[t] as Float64Array;
-      const previous = scores[t - l] as Float64Array;
-      for (let j = 0; j < p; j++) {
-        const row = cross[j] as Float64Array;
-        const value = current[j]!;
-        for (let k = 0; k < p; k++) row[k]! += value * previous[k]!;
-      }
-    }
-    for (let j = 0; j < p; j++) {
-      for (let k = 0; k < p; k++) meat[j]![k]! += weight * (cross[j]![k]! + cross[k]![j]!);
+      sum.addCross(rows[t] as Float64Array, rows[t - l] as Float64Array, weight * scores[t]! * scores[t - l]!);
     }
   }
-  return meat;
+  return sum.matrix();
 }

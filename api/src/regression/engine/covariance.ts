@@ -2,7 +2,8 @@
  * The covariance of the coefficients under the requested assumption about the errors.
  *
  * With C = (X'WX)^-1 (the solver's unscaled covariance), scores u_i = w_i e_i x_i and leverages h_i
- * (covariance-scores.ts):
+ * (covariance-scores.ts). Every sandwich is computed as sum_i c_i (w_i e_i)^2 (C x_i)(C x_i)' with C x_i
+ * formed in the solver's working coordinates (working-coordinates.ts), never as a raw quadratic form:
  *   classical   sigma^2 C,  sigma^2 = RSS / (n - p)
  *   hc0         C [sum u_i u_i'] C                                  (White 1980, Econometrica 48(4))
  *   hc1         hc0 * n / (n - p)                                   (MacKinnon & White 1985, J. Econometrics 29(3))
@@ -19,10 +20,11 @@
 
 import { AnalysisError } from './diagnostics/analysis-error';
 import { FittedModel } from './diagnostics/model-context';
-import { sandwich, scale, SquareMatrix } from './diagnostics/small-matrix';
+import { scale, SquareMatrix } from './diagnostics/small-matrix';
 import { clusterFactor, clusterMeat, GroupLabel, indexGroups } from './covariance-cluster';
 import { neweyWestMeat, resolveNeweyWestLag } from './covariance-newey-west';
-import { leverages, scoreRows, weightedOuterSum } from './covariance-scores';
+import { heteroskedasticMeat, scoreFactors } from './covariance-scores';
+import { mapWorkingMatrix, RowVectors, rowVectors } from './working-coordinates';
 
 export const COVARIANCE_TYPES = ['classical', 'hc0', 'hc1', 'hc2', 'hc3', 'newey-west', 'cluster'] as const;
 export type CovarianceType = (typeof COVARIANCE_TYPES)[number];
@@ -52,7 +54,10 @@ export interface CovarianceDescription {
 }
 
 export interface CoefficientCovariance {
+  /** Covariance of the coefficients b. */
   matrix: SquareMatrix;
+  /** The same covariance for the working coefficients g (b = M g); predictions use it. */
+  workingMatrix?: SquareMatrix;
   description: CovarianceDescription;
 }
 
@@ -73,7 +78,6 @@ export function coefficientCovariance(model: FittedModel, request: CovarianceReq
   const { design, solution } = model;
   const n = design.n;
   const p = design.columns.length;
-  const bread = solution.unscaledCovariance;
   const residualDegreesOfFreedom = n - p;
   const base: CovarianceDescription = {
     type,
@@ -86,35 +90,35 @@ export function coefficientCovariance(model: FittedModel, request: CovarianceReq
   };
   if (type === 'classical') {
     const variance = solution.residualSumOfSquares / residualDegreesOfFreedom;
-    return { matrix: scale(bread, variance), description: base };
+    return { matrix: scale(solution.unscaledCovariance, variance), workingMatrix: scale(workingBread(model), variance), description: base };
   }
-  const scores = scoreRows(model);
+  const vectors = rowVectors(solution, model.weights);
+  const scores = scoreFactors(model);
   if (type === 'hc0' || type === 'hc1') {
     const factor = type === 'hc1' ? n / residualDegreesOfFreedom : 1;
-    return { matrix: scale(sandwich(bread, weightedOuterSum(scores, null)), factor), description: { ...base, smallSampleFactor: factor } };
+    return { ...sandwichOf(model, vectors, (a) => heteroskedasticMeat(a, scores, null), factor), description: { ...base, smallSampleFactor: factor } };
   }
   if (type === 'hc2' || type === 'hc3') {
     const power = type === 'hc2' ? 1 : 2;
-    const leverage = leverages(model);
     const factors = new Float64Array(n);
     for (let i = 0; i < n; i++) {
-      const remaining = 1 - leverage[i]!;
+      const remaining = 1 - vectors.leverage[i]!;
       if (!(remaining > 1e-12)) {
         throw new AnalysisError(
           'leverage-of-one',
-          `Row ${i} (0-based) has leverage 1 (the model fits it exactly whatever its value), so ${type.toUpperCase()} is not defined; use hc0 or hc1.`,
+          `Row ${i} (0-based) has leverage 1 (the model fits it exactly whatever its value), so ${type.toUpperCase()} is not defined; use HC0 or HC1.`,
           { field: 'covariance.type', row: i },
         );
       }
       factors[i] = 1 / Math.pow(remaining, power);
     }
-    return { matrix: sandwich(bread, weightedOuterSum(scores, factors)), description: base };
+    return { ...sandwichOf(model, vectors, (a) => heteroskedasticMeat(a, scores, factors), 1), description: base };
   }
   if (type === 'newey-west') {
     const { lag, rule } = resolveNeweyWestLag(request.lag, n);
     const factor = request.smallSampleCorrection === true ? n / residualDegreesOfFreedom : 1;
     return {
-      matrix: scale(sandwich(bread, neweyWestMeat(scores, lag)), factor),
+      ...sandwichOf(model, vectors, (a) => neweyWestMeat(a, scores, lag), factor),
       description: { ...base, lag, lagRule: rule, kernel: 'bartlett', smallSampleFactor: factor },
     };
   }
@@ -126,7 +130,34 @@ export function coefficientCovariance(model: FittedModel, request: CovarianceReq
   const { index, count } = indexGroups(request.groups, n);
   const factor = clusterFactor(count, n, p);
   return {
-    matrix: scale(sandwich(bread, clusterMeat(scores, index, count)), factor),
+    ...sandwichOf(model, vectors, (a) => clusterMeat(a, scores, index, count), factor),
     description: { ...base, clusterCount: count, smallSampleFactor: factor, inferenceDegreesOfFreedom: count - 1 },
   };
+}
+
+/** (A'A)^-1 of the working design as rows (hi + lo rounded). */
+function workingBread(model: FittedModel): SquareMatrix {
+  const { covariance, covarianceLow, design } = model.solution.working;
+  const p = design.p;
+  const rows: SquareMatrix = [];
+  for (let j = 0; j < p; j++) {
+    rows.push(Float64Array.from({ length: p }, (_, k) => covariance[j * p + k]! + (covarianceLow ? covarianceLow[j * p + k]! : 0)));
+  }
+  return rows;
+}
+
+/**
+ * The sandwich in both parametrisations from the per-row vectors (working-coordinates.ts): the meat is
+ * summed over v_i = C z_i (working) and vb_i = (X'WX)^-1 x_i (caller's), so no bread multiplication
+ * remains. When the problem is too large for the double-double row vectors, the working matrix is mapped.
+ */
+function sandwichOf(
+  model: FittedModel,
+  vectors: RowVectors,
+  meat: (rows: Float64Array[]) => SquareMatrix,
+  factor: number,
+): { matrix: SquareMatrix; workingMatrix: SquareMatrix } {
+  const workingMatrix = scale(meat(vectors.working), factor);
+  const matrix = vectors.exact ? scale(meat(vectors.design), factor) : mapWorkingMatrix(model.solution.working.design, workingMatrix);
+  return { matrix, workingMatrix };
 }

@@ -21,7 +21,8 @@ import { EngineError } from './errors';
 import { solveRefinedQr } from './refined-qr-solver';
 import { solveTallSkinny } from './tall-skinny-solver';
 import { firstNonFinite } from './finite-values';
-import { prepareWorkingDesign } from './working-design';
+import { prepareWorkingDesign, WorkingDesign } from './working-design';
+import { isPerfectFit } from './perfect-fit';
 
 export const INTERCEPT_NAME = '(intercept)';
 
@@ -63,8 +64,10 @@ export interface LeastSquaresSolution {
   fitted: Float64Array;
   /** y - X b on the response's own scale (not multiplied by sqrt(w)). */
   residuals: Float64Array;
-  /** sum_i w_i (y_i - x_i'b)^2 (w_i = 1 without weights). */
+  /** sum_i w_i (y_i - x_i'b)^2 (w_i = 1 without weights); exactly 0 for a perfect fit (perfect-fit.ts). */
   residualSumOfSquares: number;
+  /** The residuals are rounding noise of the response (perfect-fit.ts): the one flag every part reads. */
+  perfectFit: boolean;
   /** (X'WX)^-1 as p rows, formed from the QR factor R, never by inverting X'X. */
   unscaledCovariance: Float64Array[];
   /** Diagonal of the hat matrix W^1/2 X (X'WX)^-1 X' W^1/2, when requested. */
@@ -76,6 +79,22 @@ export interface LeastSquaresSolution {
   /** Refinement steps taken for the coefficients. */
   refinementSteps: number;
   method: LeastSquaresMethod;
+  /**
+   * The solve in its centred and scaled working coordinates (working-design.ts): every derived quantity
+   * (sandwich covariances, leverages, predictions, auxiliary regressions) is computed here and mapped back
+   * once, so offsets such as epoch timestamps or price levels never enter a raw quadratic form.
+   */
+  working: WorkingFit;
+}
+
+export interface WorkingFit {
+  design: WorkingDesign;
+  /** g with b = M g, as hi + lo. */
+  coefficients: Float64Array;
+  coefficientsLow: Float64Array;
+  /** (A'A)^-1 for A = S Z, row-major p x p, as hi + lo (lo null when the solver did not refine it). */
+  covariance: Float64Array;
+  covarianceLow: Float64Array | null;
 }
 
 export function solveLeastSquares(
@@ -89,12 +108,24 @@ export function solveLeastSquares(
   const working = prepareWorkingDesign(names, columns, n, hasIntercept, options.weights, design.lowParts);
   const computeLeverage = options.computeLeverage === true;
   const method = options.method ?? (n * p > TALL_SKINNY_THRESHOLD ? 'tall-skinny' : 'householder-refined');
-  if (method === 'tall-skinny') {
-    const solution = solveTallSkinny(working, response, computeLeverage);
-    return { ...solution, rank: p, method: solution.solver ?? 'householder-refined' };
-  }
-  const solution = solveRefinedQr(working, response, computeLeverage);
-  return { ...solution, rank: p, method: 'householder-refined' };
+  const solution =
+    method === 'tall-skinny' ? solveTallSkinny(working, response, computeLeverage) : solveRefinedQr(working, response, computeLeverage);
+  const { workingCoefficients, workingCoefficientsLow, workingCovariance, workingCovarianceLow, solver, ...rest } = solution;
+  const perfectFit = isPerfectFit(solution.residuals, response, options.weights);
+  return {
+    ...rest,
+    residualSumOfSquares: perfectFit ? 0 : solution.residualSumOfSquares,
+    perfectFit,
+    rank: p,
+    method: method === 'tall-skinny' ? (solver ?? 'householder-refined') : 'householder-refined',
+    working: {
+      design: working,
+      coefficients: workingCoefficients,
+      coefficientsLow: workingCoefficientsLow,
+      covariance: workingCovariance,
+      covarianceLow: workingCovarianceLow,
+    },
+  };
 }
 
 /** Shape and value checks; fit-model.ts has already given friendlier messages for request data. */

@@ -30,6 +30,7 @@ import { EngineError } from './errors';
 import { FunctionalForm, predictorTransformation, responseTransformation } from './functional-forms';
 import { AnalysisError } from './diagnostics/analysis-error';
 import { bilinear, SquareMatrix } from './diagnostics/small-matrix';
+import { evaluateAtPoint, WorkingPredictionModel } from './working-coordinates';
 
 export interface PredictionModel {
   /** Predictor names in the order the points give their values. */
@@ -45,6 +46,12 @@ export interface PredictionModel {
   form: FunctionalForm;
   /** Duan's smearing factor of the log-scale residuals (log-y forms); null when not supplied. */
   smearingFactor?: number | null;
+  /**
+   * The fit in its working coordinates (working-coordinates.ts). When present, the estimate and its
+   * variance are evaluated there, free of the offsets of the predictors; models stored before it existed
+   * fall back to x0'b and x0' V x0.
+   */
+  working?: WorkingPredictionModel;
 }
 
 export interface Interval {
@@ -119,8 +126,13 @@ export function predictAt(model: PredictionModel, points: unknown, confidenceLev
       x.push(logPredictors ? Math.log(value) : value);
     });
     let estimate = 0;
-    for (let j = 0; j < x.length; j++) estimate += x[j]! * model.coefficients[j]!;
-    const meanVariance = Math.max(0, bilinear(x, model.covariance, x));
+    let meanVariance = 0;
+    if (model.working) {
+      ({ estimate, variance: meanVariance } = evaluateAtPoint(model.working, x));
+    } else {
+      for (let j = 0; j < x.length; j++) estimate += x[j]! * model.coefficients[j]!;
+      meanVariance = Math.max(0, bilinear(x, model.covariance, x));
+    }
     const standardErrorOfMean = Math.sqrt(meanVariance);
     const standardErrorOfPrediction = Math.sqrt(model.residualVariance + meanVariance);
     const confidenceInterval = { lower: estimate - critical * standardErrorOfMean, upper: estimate + critical * standardErrorOfMean };

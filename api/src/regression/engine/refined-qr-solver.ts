@@ -49,6 +49,12 @@ export interface RefinedSolution {
   refinementSteps: number;
   /** Which solver produced it (the tall path hands ill-conditioned problems to the refined one). */
   solver?: 'householder-refined' | 'tall-skinny';
+  /** g, the coefficients in the working coordinates (b = M g, see working-design.ts), as hi + lo. */
+  workingCoefficients: Float64Array;
+  workingCoefficientsLow: Float64Array;
+  /** (A'A)^-1 of the working design A = S Z (row-major p x p) as hi + lo (lo null when not refined). */
+  workingCovariance: Float64Array;
+  workingCovarianceLow: Float64Array | null;
 }
 
 /** Refining p covariance columns costs about 10 n p^2 double-double operations: keep it bounded. */
@@ -80,9 +86,10 @@ export function solveRefinedQr(
   const fitted = new Float64Array(n);
   for (let i = 0; i < n; i++) fitted[i] = response[i]! - raw.residuals[i]!;
 
-  const unscaledCovariance = shouldRefineCovariance(n, p, conditionNumber)
-    ? refinedCovariance(design, factor)
-    : mappedCovariance(design, inverseGram(upperInverse(triangle)), null);
+  const workingCovariance = shouldRefineCovariance(n, p, conditionNumber)
+    ? refinedGramInverse(design, factor)
+    : { hi: inverseGram(upperInverse(triangle)), lo: null };
+  const unscaledCovariance = mappedCovariance(design, workingCovariance.hi, workingCovariance.lo);
 
   const solution: RefinedSolution = {
     coefficients,
@@ -92,6 +99,10 @@ export function solveRefinedQr(
     unscaledCovariance,
     conditionNumber,
     refinementSteps: state.steps,
+    workingCoefficients: state.gHi,
+    workingCoefficientsLow: state.gLo,
+    workingCovariance: workingCovariance.hi,
+    workingCovarianceLow: workingCovariance.lo,
   };
   if (computeLeverage) solution.leverage = leverageFromThinQ(factor);
   return solution;
@@ -428,8 +439,8 @@ function rawResiduals(
   return { residuals: accumulatorHi, weightedSquares: sumHi + sumLo };
 }
 
-/** (X'WX)^-1 from refined columns of (A'A)^-1, carried in double-double through the map b = M g. */
-function refinedCovariance(design: WorkingDesign, factor: HouseholderFactor): Float64Array[] {
+/** Refined columns of (A'A)^-1 in double-double (hi, lo), row-major; mapped to b by mappedCovariance. */
+function refinedGramInverse(design: WorkingDesign, factor: HouseholderFactor): { hi: Float64Array; lo: Float64Array } {
   const { p } = design;
   const gramInverseHi = new Float64Array(p * p);
   const gramInverseLo = new Float64Array(p * p);
@@ -443,7 +454,7 @@ function refinedCovariance(design: WorkingDesign, factor: HouseholderFactor): Fl
       gramInverseLo[j * p + k] = column.gLo[j]!;
     }
   }
-  return mappedCovariance(design, gramInverseHi, gramInverseLo);
+  return { hi: gramInverseHi, lo: gramInverseLo };
 }
 
 /** M C M' with C = (A'A)^-1 given as hi (+ optional lo) parts; double-double accumulation. */

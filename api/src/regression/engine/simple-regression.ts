@@ -15,6 +15,7 @@
  * The results agree with the refined QR solver to about 1e-13 relative (tested).
  */
 
+import { isPerfectFitFromSums } from './perfect-fit';
 import { EngineError } from './errors';
 import { assertFinite } from './finite-values';
 import { rankToleranceFor } from './working-design';
@@ -177,6 +178,8 @@ export function fitSimpleLine(x: Float64Array, y: Float64Array, xName = 'x', yNa
     }
   }
   residualSumOfSquares = Math.max(0, residualSumOfSquares);
+  const level = c + meanY;
+  if (isPerfectFitFromSums(residualSumOfSquares, syy + n * level * level)) residualSumOfSquares = 0;
   const inverseSxx = 1 / sxx;
   const unscaledCovariance = [
     Float64Array.of(1 / n + xMean * xMean * inverseSxx, -xMean * inverseSxx),

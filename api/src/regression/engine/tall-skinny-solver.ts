@@ -78,15 +78,20 @@ export function solveTallSkinny(design: WorkingDesign, response: Float64Array, c
 
   const { fitted, residuals, weightedSquares } = residualPass(design, response, g);
   const inverse = upperInverse(upper);
+  const workingCovariance = inverseGram(inverse);
   const solution: RefinedSolution = {
     coefficients,
     residuals,
     fitted,
     residualSumOfSquares: weightedSquares,
-    unscaledCovariance: mappedCovariance(design, inverseGram(inverse), null),
+    unscaledCovariance: mappedCovariance(design, workingCovariance, null),
     conditionNumber,
     refinementSteps,
     solver: 'tall-skinny',
+    workingCoefficients: g,
+    workingCoefficientsLow: new Float64Array(p),
+    workingCovariance,
+    workingCovarianceLow: null,
   };
   if (computeLeverage) solution.leverage = leverageFromInverse(design, inverse);
   return solution;

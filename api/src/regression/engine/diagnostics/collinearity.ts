@@ -17,7 +17,7 @@ import { SingularValueDecomposition, Matrix } from 'ml-matrix';
 import { EngineError } from '../errors';
 import { householderFactorise, upperEntry } from '../householder-qr';
 import { fitAuxiliary } from './auxiliary-regression';
-import { FittedModel, whitenedColumns } from './model-context';
+import { FittedModel, whitenedColumns, workingColumns } from './model-context';
 
 export interface VarianceInflation {
   term: string;
@@ -38,7 +38,9 @@ export function varianceInflationFactors(model: FittedModel): VarianceInflation[
   const { design, weights } = model;
   const start = design.hasIntercept ? 1 : 0;
   const names = design.names.slice(start);
-  const columns = design.columns.slice(start);
+  // Working columns: each is an affine image of the caller's column, and every auxiliary regression here
+  // has a constant, so R^2_j is unchanged, while offsets no longer enter the sums of squares.
+  const columns = workingColumns(model).slice(start);
   return names.map((term, j) => {
     if (names.length === 1) return { term, rSquared: 0, varianceInflationFactor: 1 };
     const otherNames = names.filter((_, k) => k !== j);

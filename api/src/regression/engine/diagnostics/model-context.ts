@@ -8,6 +8,7 @@
  */
 
 import { DesignMatrix, LeastSquaresSolution } from '../least-squares';
+import { workingRowInto } from '../working-coordinates';
 
 export interface FittedModel {
   design: DesignMatrix;
@@ -43,17 +44,46 @@ export function whitenedColumns(model: FittedModel): Float64Array[] {
 }
 
 /**
- * The model's regressors for an auxiliary regression: an unweighted intercept model gives the
+ * The solver's working columns z_j = (x_j - m_j) / c_j (working-design.ts), rounded, unweighted; the
+ * intercept column is the constant 1/c_0. Each is an affine image of the caller's column, so every
+ * auxiliary regression that includes a constant (or the intercept column) spans the same space with them
+ * as with the raw columns, and its statistics are the same in exact arithmetic; but they are centred and
+ * of unit scale, so offsets such as epoch timestamps never turn squares and cross-products into noise.
+ */
+export function workingColumns(model: FittedModel): Float64Array[] {
+  const { design } = model.solution.working;
+  const { n, p } = design;
+  const columns: Float64Array[] = [];
+  for (let j = 0; j < p; j++) columns.push(new Float64Array(n));
+  const hi = new Float64Array(p);
+  const lo = new Float64Array(p);
+  for (let i = 0; i < n; i++) {
+    workingRowInto(design, i, hi, lo);
+    for (let j = 0; j < p; j++) columns[j]![i] = hi[j]! + lo[j]!;
+  }
+  return columns;
+}
+
+function whiten(columns: Float64Array[], weights: Float64Array | undefined): Float64Array[] {
+  if (!weights) return columns;
+  const roots = weights.map(Math.sqrt);
+  return columns.map((column) => column.map((value, i) => value * roots[i]!));
+}
+
+/**
+ * The model's regressors for an auxiliary regression, in working coordinates (workingColumns): an
+ * unweighted intercept model gives the
  * constant plus its slope columns; otherwise every whitened column, with no separate constant (for a
  * weighted intercept model the whitened intercept column sqrt(w) takes the constant's place).
  */
 export function modelRegressors(model: FittedModel): RegressorSet {
   const { design } = model;
+  const columns = workingColumns(model);
   if (design.hasIntercept && !model.weights) {
-    return { constant: true, names: design.names.slice(1), columns: design.columns.slice(1) };
+    return { constant: true, names: design.names.slice(1), columns: columns.slice(1) };
   }
   const names = design.names.map((name, j) => (design.hasIntercept && j === 0 ? WHITENED_INTERCEPT_NAME : name));
-  return { constant: false, names, columns: whitenedColumns(model) };
+  return { constant: false, names, columns: whiten(columns, model.weights) };
 }
 
 /** Name of the whitened intercept column sqrt(w) in auxiliary regressions of a weighted fit. */

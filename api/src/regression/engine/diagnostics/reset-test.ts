@@ -15,7 +15,7 @@
 
 import { AnalysisError } from './analysis-error';
 import { fitAuxiliary } from './auxiliary-regression';
-import { FittedModel } from './model-context';
+import { FittedModel, workingColumns } from './model-context';
 import { fisherFOutcome, requireImperfectFit, requireResidualVariation, TestOutcome } from './test-outcome';
 
 export interface ResetResult extends TestOutcome {
@@ -36,19 +36,23 @@ export function resetTest(
       field: 'diagnosticOptions.resetMaxPower',
     });
   }
-  const { design, solution, response, weights } = model;
+  const { design, solution, weights } = model;
   requireImperfectFit(model, 'RESET test');
   const n = design.n;
   const p = design.columns.length;
   const powerNames: string[] = [];
   const powerColumns: Float64Array[] = [];
+  const base = fittedForPowers(model);
   for (let power = 2; power <= maxPower; power++) {
     powerNames.push(`fitted^${power}`);
-    powerColumns.push(solution.fitted.map((value) => Math.pow(value, power)));
+    powerColumns.push(base.map((value) => Math.pow(value, power)));
   }
+  // The model's own residuals as the response: y = X b + e, so the residuals of e on [X, powers] are those
+  // of y on [X, powers], without the response's level entering the auxiliary solve.
+  const columns = workingColumns(model);
   const slopeNames = design.hasIntercept ? design.names.slice(1) : design.names;
-  const slopeColumns = design.hasIntercept ? design.columns.slice(1) : design.columns;
-  const augmented = fitAuxiliary([...slopeNames, ...powerNames], [...slopeColumns, ...powerColumns], response, {
+  const slopeColumns = design.hasIntercept ? columns.slice(1) : columns;
+  const augmented = fitAuxiliary([...slopeNames, ...powerNames], [...slopeColumns, ...powerColumns], solution.residuals, {
     constant: design.hasIntercept,
     ...(weights ? { weights } : {}),
   });
@@ -71,4 +75,33 @@ export function resetTest(
     powers,
     ...fisherFOutcome(statistic, q, denominatorDegreesOfFreedom, significanceLevel),
   };
+}
+
+/**
+ * The fitted values to raise to powers, shifted and scaled: with an intercept, yhat - g_0/c_0 computed in
+ * working coordinates as sum_{j >= 1} g_j z_ij (no cancellation against the response's level), then
+ * divided by a power of two near its largest magnitude. Shifting yhat by a constant and scaling it do not
+ * change the span of {1, X, yhat^2, ..., yhat^k} when X contains the constant, so the statistic is the
+ * one defined on yhat itself. Without an intercept no shift is allowed, only the scaling.
+ */
+function fittedForPowers(model: FittedModel): Float64Array {
+  const { design, solution } = model;
+  let values: Float64Array;
+  if (design.hasIntercept) {
+    const columns = workingColumns(model);
+    const g = solution.working.coefficients;
+    values = new Float64Array(design.n);
+    for (let j = 1; j < columns.length; j++) {
+      const column = columns[j] as Float64Array;
+      const coefficient = g[j]!;
+      for (let i = 0; i < design.n; i++) values[i]! += coefficient * column[i]!;
+    }
+  } else values = Float64Array.from(solution.fitted);
+  let largest = 0;
+  for (let i = 0; i < values.length; i++) largest = Math.max(largest, Math.abs(values[i]!));
+  if (largest > 0 && Number.isFinite(largest)) {
+    const inverse = Math.pow(2, -Math.round(Math.log2(largest)));
+    for (let i = 0; i < values.length; i++) values[i]! *= inverse;
+  }
+  return values;
 }

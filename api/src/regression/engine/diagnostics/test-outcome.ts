@@ -76,21 +76,12 @@ export function requireResidualVariation(residualSumOfSquares: number, test: str
   }
 }
 
-/**
- * Relative size below which residuals are rounding noise: ||e|| <= 1e-12 ||y|| (weighted norms). The
- * solver's own rounding leaves residuals near 1e-16 ||y|| times the condition number, and real data
- * noise is far above 1e-12, so a check on such residuals would test rounding, not the data.
- */
-export const NEGLIGIBLE_RESIDUAL_RATIO = 1e-12;
-
 export function requireImperfectFit(model: FittedModel, test: string): void {
-  const { response, weights, solution } = model;
-  let responseSquares = 0;
-  for (let i = 0; i < response.length; i++) responseSquares += (weights ? weights[i]! : 1) * response[i]! * response[i]!;
-  if (!(solution.residualSumOfSquares > NEGLIGIBLE_RESIDUAL_RATIO * NEGLIGIBLE_RESIDUAL_RATIO * responseSquares)) {
+  // One rule for the whole answer (perfect-fit.ts): the solver decides, every check reads its flag.
+  if (model.solution.perfectFit) {
     throw new AnalysisError(
       'perfect-fit',
-      `The model fits every observation exactly (to within rounding), so the ${test} is not defined.`,
+      `The model fits every observation exactly (to within the rounding of the response), so the ${test} is not defined.`,
       { field: 'diagnostics' },
     );
   }
