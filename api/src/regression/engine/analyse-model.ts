@@ -140,7 +140,7 @@ function snapshotOf(
       hasIntercept: validated.intercept,
       coefficients: model.solution.coefficients,
       covariance: covariance.matrix,
-      ...(covariance.workingMatrix ? { working: workingPredictionModel(model.solution, covariance.workingMatrix) } : {}),
+      ...(covariance.workingMatrix ? { working: workingPredictionModel(model.solution, covariance.workingMatrix, covariance.workingMatrixLow) } : {}),
       residualVariance: model.solution.residualSumOfSquares / (n - p),
       degreesOfFreedom: covariance.description.inferenceDegreesOfFreedom,
       form: validated.form,

@@ -90,7 +90,6 @@ export function fitBatch(input: BatchFitInput): BatchFitResult {
   const shared = factoriseShared(input.predictors, transformed, intercept);
   const degreesOfFreedom = n - p;
   const critical = studentTInverseSurvival((1 - confidenceLevel) / 2, degreesOfFreedom);
-  const scratch = new Float64Array(n);
   const layout = { names: shared.names, hasIntercept: intercept };
   const fits = input.responses.map((name): BatchResponseFit | BatchResponseFailure => {
     try {
@@ -99,7 +98,7 @@ export function fitBatch(input: BatchFitInput): BatchFitResult {
         throw new EngineError('length-mismatch', `Column "${name}" has ${raw.length} values, expected ${n}.`, { column: name });
       }
       const response = transformColumn(name, raw, responseTransformation(form));
-      const solution = solveShared(shared, response, scratch);
+      const solution = solveShared(shared, response);
       if (!(solution.totalSumOfSquares > 0)) {
         throw new EngineError('constant-response', `Response "${name}" does not vary, so R^2 and the F-test are not defined.`, {
           column: name,

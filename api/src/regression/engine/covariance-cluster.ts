@@ -10,7 +10,6 @@
  */
 
 import { AnalysisError } from './diagnostics/analysis-error';
-import { SquareMatrix } from './diagnostics/small-matrix';
 import { ddAdd, twoProduct } from './double-double';
 import { OuterSum } from './working-coordinates';
 
@@ -53,7 +52,7 @@ export function indexGroups(groups: ArrayLike<GroupLabel>, n: number): { index: 
 }
 
 /** C [sum_g s_g s_g'] C with C s_g = sum_{i in g} f_i a_i, the group sums kept in double-double. */
-export function clusterMeat(rows: Float64Array[], scores: Float64Array, index: Int32Array, count: number): SquareMatrix {
+export function clusterMeat(rows: Float64Array[], scores: Float64Array, index: Int32Array, count: number): OuterSum {
   const p = rows[0]?.length ?? 0;
   const hi = new Float64Array(count * p);
   const lo = new Float64Array(count * p);
@@ -72,7 +71,7 @@ export function clusterMeat(rows: Float64Array[], scores: Float64Array, index: I
   for (let g = 0; g < count; g++) {
     total.addSquare(Float64Array.from({ length: p }, (_, j) => hi[g * p + j]! + lo[g * p + j]!), 1);
   }
-  return total.matrix();
+  return total;
 }
 
 export function clusterFactor(groupCount: number, n: number, p: number): number {

@@ -12,7 +12,6 @@
  */
 
 import { AnalysisError } from './diagnostics/analysis-error';
-import { SquareMatrix } from './diagnostics/small-matrix';
 import { OuterSum } from './working-coordinates';
 
 export function automaticNeweyWestLag(n: number): number {
@@ -40,7 +39,7 @@ export function resolveNeweyWestLag(lag: number | 'automatic' | undefined, n: nu
  * C S C for the HAC meat S, from a_t = C x_t and f_t = w_t e_t in time order:
  *   sum_t f_t^2 a_t a_t' + sum_{l=1..L} w_l sum_{t>l} f_t f_{t-l} (a_t a_{t-l}' + a_{t-l} a_t').
  */
-export function neweyWestMeat(rows: Float64Array[], scores: Float64Array, lag: number): SquareMatrix {
+export function neweyWestMeat(rows: Float64Array[], scores: Float64Array, lag: number): OuterSum {
   const n = rows.length;
   const p = rows[0]?.length ?? 0;
   const sum = new OuterSum(p);
@@ -51,5 +50,5 @@ export function neweyWestMeat(rows: Float64Array[], scores: Float64Array, lag: n
       sum.addCross(rows[t] as Float64Array, rows[t - l] as Float64Array, weight * scores[t]! * scores[t - l]!);
     }
   }
-  return sum.matrix();
+  return sum;
 }

@@ -8,7 +8,6 @@
  */
 
 import { FittedModel } from './diagnostics/model-context';
-import { SquareMatrix } from './diagnostics/small-matrix';
 import { OuterSum } from './working-coordinates';
 
 /** f_i = w_i e_i. */
@@ -21,12 +20,12 @@ export function scoreFactors(model: FittedModel): Float64Array {
 }
 
 /** sum_i c_i f_i^2 a_i a_i' (c_i = 1 when `extra` is null): HC0 to HC3 before any small-sample factor. */
-export function heteroskedasticMeat(rows: Float64Array[], scores: Float64Array, extra: Float64Array | null): SquareMatrix {
+export function heteroskedasticMeat(rows: Float64Array[], scores: Float64Array, extra: Float64Array | null): OuterSum {
   const p = rows[0]?.length ?? 0;
   const sum = new OuterSum(p);
   for (let i = 0; i < rows.length; i++) {
     const f = scores[i]!;
     sum.addSquare(rows[i] as Float64Array, f * f * (extra ? extra[i]! : 1));
   }
-  return sum.matrix();
+  return sum;
 }

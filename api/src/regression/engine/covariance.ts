@@ -24,7 +24,8 @@ import { scale, SquareMatrix } from './diagnostics/small-matrix';
 import { clusterFactor, clusterMeat, GroupLabel, indexGroups } from './covariance-cluster';
 import { neweyWestMeat, resolveNeweyWestLag } from './covariance-newey-west';
 import { heteroskedasticMeat, scoreFactors } from './covariance-scores';
-import { mapWorkingMatrix, RowVectors, rowVectors } from './working-coordinates';
+import { mapWorkingMatrix, OuterSum, RowVectors, rowVectors } from './working-coordinates';
+import { ddAdd, twoProduct } from './double-double';
 
 export const COVARIANCE_TYPES = ['classical', 'hc0', 'hc1', 'hc2', 'hc3', 'newey-west', 'cluster'] as const;
 export type CovarianceType = (typeof COVARIANCE_TYPES)[number];
@@ -58,6 +59,7 @@ export interface CoefficientCovariance {
   matrix: SquareMatrix;
   /** The same covariance for the working coefficients g (b = M g); predictions use it. */
   workingMatrix?: SquareMatrix;
+  workingMatrixLow?: SquareMatrix;
   description: CovarianceDescription;
 }
 
@@ -90,7 +92,9 @@ export function coefficientCovariance(model: FittedModel, request: CovarianceReq
   };
   if (type === 'classical') {
     const variance = solution.residualSumOfSquares / residualDegreesOfFreedom;
-    return { matrix: scale(solution.unscaledCovariance, variance), workingMatrix: scale(workingBread(model), variance), description: base };
+    const bread = workingBread(model);
+    const working = scaleDoubleDouble(bread.hi, bread.lo, variance);
+    return { matrix: scale(solution.unscaledCovariance, variance), workingMatrix: working.hi, workingMatrixLow: working.lo, description: base };
   }
   const vectors = rowVectors(solution, model.weights);
   const scores = scoreFactors(model);
@@ -135,15 +139,32 @@ export function coefficientCovariance(model: FittedModel, request: CovarianceReq
   };
 }
 
-/** (A'A)^-1 of the working design as rows (hi + lo rounded). */
-function workingBread(model: FittedModel): SquareMatrix {
+/** (A'A)^-1 of the working design as rows of hi and lo parts. */
+function workingBread(model: FittedModel): { hi: SquareMatrix; lo: SquareMatrix } {
   const { covariance, covarianceLow, design } = model.solution.working;
   const p = design.p;
-  const rows: SquareMatrix = [];
+  const hi: SquareMatrix = [];
+  const lo: SquareMatrix = [];
   for (let j = 0; j < p; j++) {
-    rows.push(Float64Array.from({ length: p }, (_, k) => covariance[j * p + k]! + (covarianceLow ? covarianceLow[j * p + k]! : 0)));
+    hi.push(covariance.slice(j * p, (j + 1) * p));
+    lo.push(covarianceLow ? covarianceLow.slice(j * p, (j + 1) * p) : new Float64Array(p));
   }
-  return rows;
+  return { hi, lo };
+}
+
+/** (hi + lo) * factor as a double-double (TwoProduct of hi, so no digit of the pair is lost). */
+function scaleDoubleDouble(hi: SquareMatrix, lo: SquareMatrix, factor: number): { hi: SquareMatrix; lo: SquareMatrix } {
+  const outHi = hi.map((row) => new Float64Array(row.length));
+  const outLo = hi.map((row) => new Float64Array(row.length));
+  hi.forEach((row, j) => {
+    row.forEach((value, k) => {
+      const product = twoProduct(value, factor);
+      const sum = ddAdd(product.hi, product.lo, lo[j]![k]! * factor, 0);
+      outHi[j]![k] = sum.hi;
+      outLo[j]![k] = sum.lo;
+    });
+  });
+  return { hi: outHi, lo: outLo };
 }
 
 /**
@@ -154,10 +175,11 @@ function workingBread(model: FittedModel): SquareMatrix {
 function sandwichOf(
   model: FittedModel,
   vectors: RowVectors,
-  meat: (rows: Float64Array[]) => SquareMatrix,
+  meat: (rows: Float64Array[]) => OuterSum,
   factor: number,
-): { matrix: SquareMatrix; workingMatrix: SquareMatrix } {
-  const workingMatrix = scale(meat(vectors.working), factor);
-  const matrix = vectors.exact ? scale(meat(vectors.design), factor) : mapWorkingMatrix(model.solution.working.design, workingMatrix);
-  return { matrix, workingMatrix };
+): { matrix: SquareMatrix; workingMatrix: SquareMatrix; workingMatrixLow: SquareMatrix } {
+  const workingSum = meat(vectors.working);
+  const working = scaleDoubleDouble(workingSum.matrix(), workingSum.lowMatrix(), factor);
+  const matrix = vectors.exact ? scale(meat(vectors.design).matrix(), factor) : mapWorkingMatrix(model.solution.working.design, working.hi);
+  return { matrix, workingMatrix: working.hi, workingMatrixLow: working.lo };
 }

@@ -62,33 +62,55 @@ export function shouldRefineCovariance(n: number, p: number, conditionNumber: nu
   return n * p * p <= 4e6 || (conditionNumber > 1e6 && n * p * p <= 4e8);
 }
 
-export function solveRefinedQr(
-  design: WorkingDesign,
-  response: Float64Array,
-  computeLeverage: boolean,
-): RefinedSolution {
+export interface WorkingFactor {
+  factor: HouseholderFactor;
+  triangle: UpperTriangular;
+  conditionNumber: number;
+}
+
+/** Householder QR of the working design, with the engine's one rank rule (collinearity raised here). */
+export function factoriseWorking(design: WorkingDesign): WorkingFactor {
   const { n, p } = design;
   const packed: Float64Array[] = [];
   for (let j = 0; j < p; j++) packed.push(workingColumn(design, j));
   const outcome = householderFactorise(packed, n, design.rankTolerance, design.offsetRatio);
   if ('failure' in outcome) throw collinearityError(design, outcome.failure.column, outcome.failure.dependency);
-  const factor = outcome.factor;
-  const triangle = extractTriangle(factor);
-  const conditionNumber = frobeniusConditionNumber(triangle);
+  const triangle = extractTriangle(outcome.factor);
+  return { factor: outcome.factor, triangle, conditionNumber: frobeniusConditionNumber(triangle) };
+}
 
+/** (A'A)^-1 of the working design as hi + lo: refined columns when affordable, else from R^-1. */
+export function workingGramInverse(design: WorkingDesign, factored: WorkingFactor): { hi: Float64Array; lo: Float64Array | null } {
+  return shouldRefineCovariance(design.n, design.p, factored.conditionNumber)
+    ? refinedGramInverse(design, factored.factor)
+    : { hi: inverseGram(upperInverse(factored.triangle)), lo: null };
+}
+
+/** One response against an existing factor: refined g (hi, lo), b, residuals and the weighted RSS. */
+export function solveWithFactor(design: WorkingDesign, factor: HouseholderFactor, response: Float64Array) {
+  const { n, p } = design;
   const state = refineAugmented(design, factor, response, null);
-
   const mapped = toDesignCoefficients(design, state.gHi, state.gLo);
   const coefficients = new Float64Array(p);
   for (let j = 0; j < p; j++) coefficients[j] = mapped.hi[j]! + mapped.lo[j]!;
-
   const raw = rawResiduals(design, response, state.gHi, state.gLo);
+  return { state, coefficients, residuals: raw.residuals, residualSumOfSquares: raw.weightedSquares, n };
+}
+
+export function solveRefinedQr(
+  design: WorkingDesign,
+  response: Float64Array,
+  computeLeverage: boolean,
+): RefinedSolution {
+  const { n } = design;
+  const factored = factoriseWorking(design);
+  const { factor, conditionNumber } = factored;
+  const { state, coefficients, residuals, residualSumOfSquares } = solveWithFactor(design, factor, response);
+  const raw = { residuals, weightedSquares: residualSumOfSquares };
   const fitted = new Float64Array(n);
   for (let i = 0; i < n; i++) fitted[i] = response[i]! - raw.residuals[i]!;
 
-  const workingCovariance = shouldRefineCovariance(n, p, conditionNumber)
-    ? refinedGramInverse(design, factor)
-    : { hi: inverseGram(upperInverse(triangle)), lo: null };
+  const workingCovariance = workingGramInverse(design, factored);
   const unscaledCovariance = mappedCovariance(design, workingCovariance.hi, workingCovariance.lo);
 
   const solution: RefinedSolution = {

@@ -242,6 +242,22 @@ export class OuterSum {
     this.hi[index] = total;
   }
 
+  /** The low parts left after rounding (hi + lo - rounded), symmetric. */
+  lowMatrix(): SquareMatrix {
+    const { p } = this;
+    const result = zeroMatrix(p);
+    for (let j = 0; j < p; j++) {
+      for (let k = j; k < p; k++) {
+        const hi = this.hi[j * p + k]!;
+        const lo = this.lo[j * p + k]!;
+        const value = lo - (hi + lo - hi);
+        result[j]![k] = value;
+        result[k]![j] = value;
+      }
+    }
+    return result;
+  }
+
   /** The rounded symmetric matrix. */
   matrix(): SquareMatrix {
     const { p } = this;
@@ -275,11 +291,18 @@ export interface WorkingPredictionModel {
   coefficientsLow: number[];
   /** Covariance of g under the chosen covariance type (already multiplied by sigma^2 when classical). */
   covariance: number[][];
+  /** Its low parts (double-double), so that z0' V z0 keeps its digits for ill-conditioned designs. */
+  covarianceLow?: number[][];
 }
 
-export function workingPredictionModel(solution: LeastSquaresSolution, workingCovarianceOfG: SquareMatrix): WorkingPredictionModel {
+export function workingPredictionModel(
+  solution: LeastSquaresSolution,
+  workingCovarianceOfG: SquareMatrix,
+  workingCovarianceLow: SquareMatrix | undefined,
+): WorkingPredictionModel {
   const { design, coefficients, coefficientsLow } = solution.working;
   return {
+    ...(workingCovarianceLow ? { covarianceLow: workingCovarianceLow.map((row) => Array.from(row)) } : {}),
     shift: Array.from(design.shift),
     inverseScale: Array.from(design.inverseScale),
     interceptIndex: design.interceptIndex,
@@ -317,10 +340,16 @@ export function evaluateAtPoint(model: WorkingPredictionModel, point: ArrayLike<
     eHi = total;
   }
   const covariance = new Float64Array(p * p);
-  for (let j = 0; j < p; j++) for (let k = 0; k < p; k++) covariance[j * p + k] = model.covariance[j]![k]!;
+  const covarianceLow = model.covarianceLow ? new Float64Array(p * p) : null;
+  for (let j = 0; j < p; j++) {
+    for (let k = 0; k < p; k++) {
+      covariance[j * p + k] = model.covariance[j]![k]!;
+      if (covarianceLow) covarianceLow[j * p + k] = model.covarianceLow![j]![k]!;
+    }
+  }
   const vHi = new Float64Array(p);
   const vLo = new Float64Array(p);
-  multiplyInto(p, covariance, null, zHi, zLo, vHi, vLo);
+  multiplyInto(p, covariance, covarianceLow, zHi, zLo, vHi, vLo);
   let sHi = 0;
   let sLo = 0;
   for (let j = 0; j < p; j++) {

@@ -20,7 +20,7 @@
 
 import { incompleteBeta } from '../special-functions';
 import { AnalysisError } from './analysis-error';
-import { FittedModel, whitenedColumns, whitenedResiduals } from './model-context';
+import { FittedModel, whitenedResiduals, workingColumns } from './model-context';
 import { multiply, SquareMatrix, trace, zeroMatrix } from './small-matrix';
 import { requireImperfectFit, requireResidualVariation, TestOutcome } from './test-outcome';
 
@@ -102,11 +102,17 @@ export function durbinWatsonTest(
   const residuals = whitenedResiduals(model);
   const n = residuals.length;
   const statistic = durbinWatsonStatistic(residuals);
-  const { mean, variance } = durbinWatsonNullMoments(
-    whitenedColumns(model),
-    model.solution.unscaledCovariance,
-    n,
-  );
+  // The hat matrix from the working design A = S Z and its (A'A)^-1: the same projection as from the
+  // raw columns, without their offsets (working-coordinates.ts).
+  const { covariance, covarianceLow, design } = model.solution.working;
+  const p = design.p;
+  const workingInverse: SquareMatrix = [];
+  for (let j = 0; j < p; j++) {
+    workingInverse.push(Float64Array.from({ length: p }, (_, k) => covariance[j * p + k]! + (covarianceLow ? covarianceLow[j * p + k]! : 0)));
+  }
+  const roots = model.weights ? model.weights.map(Math.sqrt) : null;
+  const columns = workingColumns(model).map((column) => (roots ? column.map((value, i) => value * roots[i]!) : column));
+  const { mean, variance } = durbinWatsonNullMoments(columns, workingInverse, n);
   const lowerTail = durbinWatsonLowerTail(statistic, mean, variance);
   const upperTail = 1 - lowerTail;
   const pValue =

@@ -96,5 +96,34 @@ export const WHITENED_INTERCEPT_NAME = 'sqrt(weight)';
  */
 export function nonConstantRegressors(model: FittedModel): { names: string[]; columns: Float64Array[] } {
   const regressors = modelRegressors(model);
-  return { names: regressors.names, columns: regressors.columns };
+  return { names: regressors.names, columns: regressors.columns.map(centredAndScaled) };
+}
+
+/**
+ * A column minus its mean (x - m in double-double, then rounded), divided by a power of two near its
+ * norm. The tests that add their own constant (Breusch-Pagan, White) span the same space with these
+ * columns, their squares and cross-products as with the originals, so their statistics are unchanged;
+ * centring keeps a level (a price near 1e5 in a model without intercept) out of the squares.
+ */
+function centredAndScaled(column: Float64Array): Float64Array {
+  const n = column.length;
+  let sum = 0;
+  for (let i = 0; i < n; i++) sum += column[i]!;
+  let mean = sum / n;
+  let correction = 0;
+  for (let i = 0; i < n; i++) correction += column[i]! - mean;
+  mean += correction / n;
+  const out = new Float64Array(n);
+  let squares = 0;
+  for (let i = 0; i < n; i++) {
+    const x = column[i]!;
+    const d = x - mean;
+    const back = d - x;
+    out[i] = d + (x - (d - back) + (-mean - back));
+    squares += out[i]! * out[i]!;
+  }
+  if (!(squares > 0) || !Number.isFinite(squares)) return out;
+  const inverse = Math.pow(2, -Math.round(Math.log2(Math.sqrt(squares))));
+  for (let i = 0; i < n; i++) out[i]! *= inverse;
+  return out;
 }
