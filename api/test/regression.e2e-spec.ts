@@ -2,6 +2,7 @@ import { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { tableFromArrays, tableToIPC } from 'apache-arrow';
 import request from 'supertest';
 import norris from '../src/regression/engine/__fixtures__/nist-strd/Norris.json';
+import epochMilliseconds from '../src/regression/engine/__fixtures__/exact/epoch-milliseconds.json';
 import { cleanUp } from './support/accounts';
 import { bearer, KeyedTeam, logRelativeError, teamWithKey, usageRows } from './support/public-api';
 import { createTestApp } from './support/test-app';
@@ -73,16 +74,32 @@ describe('public API: fits, comparisons, predictions, batch and rolling fits', (
       expect(prediction.body.prediction.predictions[0].modelScale.estimate).toBeCloseTo(b0 + b1 * 35, 10);
     });
 
-    it('switches the inference block to the requested covariance and says which', async () => {
+    it('HC3 standard errors and prediction standard errors on epoch-millisecond timestamps match the exact rational reference to 1e-10 (source: generate-exact-references.mjs)', async () => {
+      const fixture = epochMilliseconds;
+      const relative = (value: number, reference: string) => Math.abs(value - Number(reference)) / Math.abs(Number(reference));
       const response = await post('/v1/fits', {
-        data: { columns: { x: norris.data.x, y: norris.data.y } },
-        model: { response: 'y', predictors: ['x'] },
+        data: { columns: fixture.columns },
+        model: { response: fixture.response, predictors: fixture.predictors },
         covariance: { type: 'hc3' },
-        diagnostics: ['breusch-pagan'],
+        diagnostics: ['breusch-pagan', 'reset'],
       }).expect(201);
-      expect(JSON.stringify(response.body.inference.covariance)).toMatch(/hc3/);
-      expect(response.body.inference.coefficients[1].standardError).not.toBe(response.body.fit.coefficients[1].standardError);
-      expect(Object.keys(response.body.diagnostics)).toEqual(['breuschPagan']);
+      expect(response.body.inference.covariance.type).toBe('hc3');
+      response.body.inference.coefficients.forEach((row: { standardError: number }, j: number) => {
+        expect(relative(row.standardError, fixture.reference.standardErrors.hc3[j]!)).toBeLessThanOrEqual(1e-10);
+      });
+      response.body.fit.coefficients.forEach((row: { standardError: number }, j: number) => {
+        expect(relative(row.standardError, fixture.reference.classicalStandardErrors[j]!)).toBeLessThanOrEqual(1e-10);
+      });
+      expect(Object.keys(response.body.diagnostics)).toEqual(['reset', 'breuschPagan']);
+      expect(relative(response.body.diagnostics.reset.statistic, fixture.reference.checks.reset.statistic)).toBeLessThanOrEqual(1e-10);
+      expect(relative(response.body.diagnostics.breuschPagan.statistic, fixture.reference.checks.breuschPaganStudentised.statistic)).toBeLessThanOrEqual(1e-10);
+      // The stored fit keeps its working coordinates: a later prediction by id is as exact as the fit.
+      const prediction = await post('/v1/predictions', { fitId: response.body.id, points: fixture.points }).expect(201);
+      prediction.body.prediction.predictions.forEach((entry: { modelScale: { estimate: number; standardErrorOfMean: number } }, k: number) => {
+        const expected = fixture.reference.predictions.hc3[k]!;
+        expect(relative(entry.modelScale.estimate, expected.estimate)).toBeLessThanOrEqual(1e-10);
+        expect(relative(entry.modelScale.standardErrorOfMean, expected.standardErrorOfMean)).toBeLessThanOrEqual(1e-10);
+      });
     });
 
     it('drops rows listwise when asked and lists them (0-based)', async () => {

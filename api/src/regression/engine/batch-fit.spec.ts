@@ -1,6 +1,8 @@
-import { Matrix, inverse } from 'ml-matrix';
 import { linearRegression } from 'simple-statistics';
 import { fitBatch } from './batch-fit';
+import { EngineError } from './errors';
+import { fitModel } from './fit-model';
+import polynomial5 from './__fixtures__/exact/polynomial-5.json';
 import { seededSource } from './diagnostics/seeded-series';
 
 // Invented scenario: daily returns of 20 fictional instruments against one benchmark index return.
@@ -31,29 +33,35 @@ describe('batch fits against one shared factorisation', () => {
     });
   });
 
-  it('standard errors and R^2 match the direct formulas (X\'X)^-1 s^2 with two shared predictors', () => {
-    const source = seededSource(2);
-    const n = 60;
-    const rate = Array.from({ length: n }, () => 1000 + 10 * source.normal()); // large offset on purpose
-    const spread = Array.from({ length: n }, () => source.normal());
-    const columns: Record<string, number[]> = { rate, spread };
-    columns.margin = rate.map((r, i) => 0.3 * r - 2 * spread[i]! + source.normal());
-    const result = fitBatch({ columns, predictors: ['rate', 'spread'], responses: ['margin'] });
+  it('a degree-5 polynomial design reaches the exact rational reference to 1e-10 for coefficients and standard errors, as a single fit does (source: generate-exact-references.mjs)', () => {
+    const fixture = polynomial5;
+    const columns = Object.fromEntries(Object.entries(fixture.columns).map(([name, values]) => [name, Float64Array.from(values)]));
+    const result = fitBatch({ columns, predictors: fixture.predictors, responses: [fixture.response] });
     const fit = result.fits[0]!;
-    if (fit.status !== 'fitted') throw new Error('expected a fit');
-    const x = new Matrix(rate.map((r, i) => [1, r, spread[i]!]));
-    const y = Matrix.columnVector(columns.margin);
-    const bread = inverse(x.transpose().mmul(x));
-    const b = bread.mmul(x.transpose()).mmul(y);
-    const residual = y.clone().sub(x.mmul(b)).to1DArray();
-    const rss = residual.reduce((s, v) => s + v * v, 0);
-    const meanY = columns.margin.reduce((s, v) => s + v, 0) / n;
-    const tss = columns.margin.reduce((s, v) => s + (v - meanY) ** 2, 0);
+    if (fit.status !== 'fitted') throw new Error(`expected a fit, got ${fit.code}`);
     fit.coefficients.forEach((row, j) => {
-      expect(row.estimate).toBeCloseTo(b.get(j, 0), 7);
-      expect(row.standardError / Math.sqrt((bread.get(j, j) * rss) / (n - 3))).toBeCloseTo(1, 7);
+      const estimate = Number(fixture.reference.coefficients[j]);
+      const standardError = Number(fixture.reference.classicalStandardErrors[j]);
+      expect(Math.abs(row.estimate - estimate) / Math.abs(estimate)).toBeLessThanOrEqual(1e-10);
+      expect(Math.abs(row.standardError - standardError) / standardError).toBeLessThanOrEqual(1e-10);
     });
-    expect(fit.rSquared).toBeCloseTo(1 - rss / tss, 9);
+    expect(Math.abs(fit.rSquared - Number(fixture.reference.rSquared))).toBeLessThanOrEqual(1e-12);
+  });
+
+  it('refuses a near-constant predictor with the same rule and code as a single fit', () => {
+    const n = 40;
+    const level = Float64Array.from({ length: n }, (_, i) => 1e9 + (i % 2) * 1e-7); // variation below rounding of the level
+    const y = Float64Array.from({ length: n }, (_, i) => Math.sin(i));
+    let single: unknown;
+    try {
+      fitModel({ columns: { level, y }, response: 'y', predictors: ['level'] });
+    } catch (error) {
+      single = error;
+    }
+    expect(single).toBeInstanceOf(EngineError);
+    expect(() => fitBatch({ columns: { level, y }, predictors: ['level'], responses: ['y'] })).toThrow(
+      expect.objectContaining({ code: (single as EngineError).code, column: 'level' }),
+    );
   });
 
   it('reports a constant response in its own entry and still fits the others', () => {
