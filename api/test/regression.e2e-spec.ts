@@ -2,6 +2,7 @@ import { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { tableFromArrays, tableToIPC } from 'apache-arrow';
 import request from 'supertest';
 import norris from '../src/regression/engine/__fixtures__/nist-strd/Norris.json';
+import filip from '../src/regression/engine/__fixtures__/nist-strd/Filip.json';
 import epochMilliseconds from '../src/regression/engine/__fixtures__/exact/epoch-milliseconds.json';
 import { cleanUp } from './support/accounts';
 import { bearer, KeyedTeam, logRelativeError, teamWithKey, usageRows } from './support/public-api';
@@ -90,7 +91,7 @@ describe('public API: fits, comparisons, predictions, batch and rolling fits', (
       response.body.fit.coefficients.forEach((row: { standardError: number }, j: number) => {
         expect(relative(row.standardError, fixture.reference.classicalStandardErrors[j]!)).toBeLessThanOrEqual(1e-10);
       });
-      expect(Object.keys(response.body.diagnostics)).toEqual(['reset', 'breuschPagan']);
+      expect(Object.keys(response.body.diagnostics).sort()).toEqual(['breuschPagan', 'reset']);
       expect(relative(response.body.diagnostics.reset.statistic, fixture.reference.checks.reset.statistic)).toBeLessThanOrEqual(1e-10);
       expect(relative(response.body.diagnostics.breuschPagan.statistic, fixture.reference.checks.breuschPaganStudentised.statistic)).toBeLessThanOrEqual(1e-10);
       // The stored fit keeps its working coordinates: a later prediction by id is as exact as the fit.
@@ -100,6 +101,36 @@ describe('public API: fits, comparisons, predictions, batch and rolling fits', (
         expect(relative(entry.modelScale.estimate, expected.estimate)).toBeLessThanOrEqual(1e-10);
         expect(relative(entry.modelScale.standardErrorOfMean, expected.standardErrorOfMean)).toBeLessThanOrEqual(1e-10);
       });
+    });
+
+    it('fits the NIST StRD Filip degree-10 polynomial from power terms to LRE >= 9 on every coefficient and standard error (source: NIST StRD Filip)', async () => {
+      const response = await post('/v1/fits', {
+        data: { columns: { x: filip.data.x, y: filip.data.y } },
+        model: { response: 'y', predictors: Array.from({ length: 10 }, (_, k) => ({ column: 'x', power: k + 1 })) },
+        diagnostics: 'none',
+      }).expect(201);
+      const rows = response.body.fit.coefficients as { term: string; estimate: number; standardError: number }[];
+      expect(rows.map((row) => row.term)).toEqual(['(intercept)', 'x', ...Array.from({ length: 9 }, (_, k) => `x^${k + 2}`)]);
+      filip.certified_values.coefficients.forEach((certified: { estimate: number; standard_deviation: number }, j: number) => {
+        expect(logRelativeError(rows[j]!.estimate, certified.estimate)).toBeGreaterThanOrEqual(9);
+        expect(logRelativeError(rows[j]!.standardError, certified.standard_deviation)).toBeGreaterThanOrEqual(9);
+      });
+      const prediction = await post('/v1/predictions', { fitId: response.body.id, points: [[-5]] }).expect(201);
+      const expected = rows.reduce((sum, row, j) => sum + row.estimate * Math.pow(-5, j), 0);
+      expect(Math.abs(prediction.body.prediction.predictions[0].modelScale.estimate - expected)).toBeLessThanOrEqual(1e-9 * Math.abs(expected));
+    });
+
+    it('refuses a malformed power term, naming the entry', async () => {
+      const response = await post('/v1/fits', {
+        data: { columns: { x: [1, 2, 3, 4, 5], y: [1, 4, 9, 16, 26] } },
+        model: { response: 'y', predictors: ['x', { column: 'x', power: 0 }] },
+      }).expect(400);
+      expect(response.body.errors).toEqual([expect.objectContaining({ pointer: '#/model/predictors/1', detail: expect.stringMatching(/"power" must be an integer from 1 to 20/) })]);
+      const logForm = await post('/v1/fits', {
+        data: { columns: { x: [1, 2, 3, 4, 5, 6], y: [1, 4, 9, 16, 26, 35] } },
+        model: { response: 'y', predictors: ['x', { column: 'x', power: 2 }], form: 'log-log' },
+      }).expect(422);
+      expect(logForm.body.errors[0].pointer).toMatch(/^#\/model\/predictors\/1/);
     });
 
     it('drops rows listwise when asked and lists them (0-based)', async () => {

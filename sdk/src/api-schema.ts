@@ -1250,12 +1250,19 @@ export interface components {
              */
             response: string;
             /**
-             * @description Predictor columns, in order.
+             * @description Predictors, in order. Each is a column name, or a power term `{ "column": "x", "power": 3 }` whose values Leastline computes from the raw column in extended precision (the coefficient is named `x^3`), so a polynomial keeps the digits that rounding each power before sending would lose. Power terms need the lin-lin or log-lin form; points of a prediction then give one value per distinct column.
              * @example [
-             *       "ticket_size"
+             *       "ticket_size",
+             *       {
+             *         "column": "ticket_size",
+             *         "power": 2
+             *       }
              *     ]
              */
-            predictors: string[];
+            predictors: (string | {
+                column: string;
+                power: number;
+            })[];
             /**
              * @description lin-lin: y on x. log-lin: ln y on x. lin-log: y on ln x. log-log: ln y on ln x. Logs are natural logs; a non-positive value where a log is needed is an error naming the column and row.
              * @default lin-lin
@@ -2297,12 +2304,19 @@ export interface components {
              */
             response: string;
             /**
-             * @description Predictor columns, in order.
+             * @description Predictors, in order. Each is a column name, or a power term `{ "column": "x", "power": 3 }` whose values Leastline computes from the raw column in extended precision (the coefficient is named `x^3`), so a polynomial keeps the digits that rounding each power before sending would lose. Power terms need the lin-lin or log-lin form; points of a prediction then give one value per distinct column.
              * @example [
-             *       "ticket_size"
+             *       "ticket_size",
+             *       {
+             *         "column": "ticket_size",
+             *         "power": 2
+             *       }
              *     ]
              */
-            predictors: string[];
+            predictors: (string | {
+                column: string;
+                power: number;
+            })[];
             /**
              * @description Estimate an intercept.
              * @default true
@@ -2477,7 +2491,7 @@ export interface components {
             /** @description With data + model: the covariance behind the intervals (default classical). */
             covariance?: components["schemas"]["CovarianceChoiceDto"];
             /**
-             * @description Points to predict at: one list of predictor values per point, in the order of the model’s predictors, on the original scale (the model’s form applies any logs).
+             * @description Points to predict at: one list of predictor values per point, in the order of the model’s predictors, on the original scale (the model’s form applies any logs). When the predictors include power terms, give one value per distinct column, in order of first appearance (Leastline raises it to each term’s power).
              * @example [
              *       [
              *         25
@@ -2786,12 +2800,19 @@ export interface components {
              */
             response: string;
             /**
-             * @description Predictor columns, in order.
+             * @description Predictors, in order. Each is a column name, or a power term `{ "column": "x", "power": 3 }` whose values Leastline computes from the raw column in extended precision (the coefficient is named `x^3`), so a polynomial keeps the digits that rounding each power before sending would lose. Power terms need the lin-lin or log-lin form; points of a prediction then give one value per distinct column.
              * @example [
-             *       "ticket_size"
+             *       "ticket_size",
+             *       {
+             *         "column": "ticket_size",
+             *         "power": 2
+             *       }
              *     ]
              */
-            predictors: string[];
+            predictors: (string | {
+                column: string;
+                power: number;
+            })[];
             /**
              * @description lin-lin: y on x. log-lin: ln y on x. lin-log: y on ln x. log-log: ln y on ln x. Logs are natural logs; a non-positive value where a log is needed is an error naming the column and row.
              * @default lin-lin

@@ -18,7 +18,8 @@ import { CreateRollingFitDto } from './dto/rolling-fit.dto';
 import { fitAndAnalyse, fitBatch, fitRolling, predictAt, predictionModelFor, PredictionModel } from './engine/analyse-model';
 import type { CovarianceOption } from './engine/analyse-model';
 import { compareForms } from './engine/compare-forms';
-import { FitInput } from './engine/fit-input';
+import { FitInput, predictorEntryColumn } from './engine/fit-input';
+import type { PredictorEntry } from './engine/fit-input';
 import { ENGINE_VERSION } from './engine/version';
 import { runEngine } from './engine-problem';
 import { inputHash } from './input-hash';
@@ -239,6 +240,14 @@ export class RegressionService {
         [{ pointer: '#/missingValues', detail: 'only "reject" is allowed for rolling fits' }],
       );
     }
+    const powerTerm = model.predictors.findIndex((entry) => typeof entry !== 'string');
+    if (powerTerm >= 0) {
+      throw new ProblemException(
+        PROBLEM_TYPES.invalidRequest,
+        'Rolling fits take plain columns as predictors; power terms are available in fits and predictions.',
+        [{ pointer: `#/model/predictors/${powerTerm}`, detail: 'a power term is not allowed in a rolling fit' }],
+      );
+    }
     const requirements = this.requirements(model.response, model.predictors);
     const { data, source } = await this.loadData(context, body.data, requirements, 'reject');
     const rolling = runEngine(
@@ -246,7 +255,7 @@ export class RegressionService {
         fitRolling({
           columns: data.numeric,
           response: model.response,
-          predictors: model.predictors,
+          predictors: model.predictors as string[],
           intercept: model.intercept ?? true,
           form: model.form ?? 'lin-lin',
           window: body.window,
@@ -272,10 +281,14 @@ export class RegressionService {
     );
   }
 
-  private requirements(response: string, predictors: string[], weights?: string, covariance?: CovarianceChoiceDto): ColumnRequirement[] {
+  private requirements(response: string, predictors: PredictorEntry[], weights?: string, covariance?: CovarianceChoiceDto): ColumnRequirement[] {
     const list: ColumnRequirement[] = [
       { name: response, pointer: '#/model/response', kind: 'numeric' },
-      ...predictors.map((name, index) => ({ name, pointer: `#/model/predictors/${index}`, kind: 'numeric' as const })),
+      ...predictors.map((entry, index) => ({
+        name: predictorEntryColumn(entry),
+        pointer: typeof entry === 'string' ? `#/model/predictors/${index}` : `#/model/predictors/${index}/column`,
+        kind: 'numeric' as const,
+      })),
     ];
     if (weights) list.push({ name: weights, pointer: '#/model/weights', kind: 'numeric' });
     if (covariance?.type === 'cluster' && covariance.groupColumn) {

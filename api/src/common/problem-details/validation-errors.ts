@@ -15,7 +15,9 @@ export function toFieldProblems(errors: ValidationError[], parent = '#'): FieldP
   for (const error of errors) {
     const pointer = `${parent}/${escapePointerToken(String(error.property))}`;
     for (const message of Object.values(error.constraints ?? {})) {
-      problems.push({ pointer, detail: message });
+      // A validator of a whole array may point inside it: "@/1/power: reason" names element 1's field.
+      const inner = /^@((?:\/[^/:]+)+): (.*)$/s.exec(message);
+      problems.push(inner ? { pointer: `${pointer}${inner[1]}`, detail: inner[2]! } : { pointer, detail: message });
     }
     if (error.children && error.children.length > 0) {
       problems.push(...toFieldProblems(error.children, pointer));

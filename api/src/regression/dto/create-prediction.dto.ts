@@ -35,7 +35,8 @@ export class CreatePredictionDto {
   @ApiProperty({
     description:
       'Points to predict at: one list of predictor values per point, in the order of the model’s predictors, on the original scale ' +
-      '(the model’s form applies any logs).',
+      '(the model’s form applies any logs). When the predictors include power terms, give one value per distinct column, in order ' +
+      'of first appearance (Leastline raises it to each term’s power).',
     type: 'array',
     items: { type: 'array', items: { type: 'number' } },
     example: [[25], [60]],

@@ -19,6 +19,8 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { IsStrictlyBetween } from '../../common/validation/is-strictly-between';
+import { IsPredictorList, MAX_PREDICTOR_POWER } from '../../common/validation/is-predictor-entry';
+import type { PredictorEntry } from '../engine/fit-input';
 import { FUNCTIONAL_FORMS, FunctionalForm } from '../engine/functional-forms';
 import { MISSING_VALUE_POLICIES, MissingValuePolicy } from '../model-data';
 
@@ -50,12 +52,34 @@ export class ModelSpecDto {
   @MaxLength(200)
   response: string;
 
-  @ApiProperty({ description: 'Predictor columns, in order.', type: [String], example: ['ticket_size'] })
+  @ApiProperty({
+    description:
+      'Predictors, in order. Each is a column name, or a power term `{ "column": "x", "power": 3 }` whose values ' +
+      'Leastline computes from the raw column in extended precision (the coefficient is named `x^3`), so a ' +
+      'polynomial keeps the digits that rounding each power before sending would lose. Power terms need the ' +
+      'lin-lin or log-lin form; points of a prediction then give one value per distinct column.',
+    type: 'array',
+    items: {
+      oneOf: [
+        { type: 'string', minLength: 1, maxLength: 200 },
+        {
+          type: 'object',
+          required: ['column', 'power'],
+          additionalProperties: false,
+          properties: {
+            column: { type: 'string', minLength: 1, maxLength: 200 },
+            power: { type: 'integer', minimum: 1, maximum: MAX_PREDICTOR_POWER },
+          },
+        },
+      ],
+    },
+    example: ['ticket_size', { column: 'ticket_size', power: 2 }],
+  })
   @IsArray()
   @ArrayMinSize(1)
   @ArrayMaxSize(MAX_PREDICTORS)
-  @IsString({ each: true })
-  predictors: string[];
+  @IsPredictorList()
+  predictors: PredictorEntry[];
 
   @ApiPropertyOptional({
     enum: FUNCTIONAL_FORMS,

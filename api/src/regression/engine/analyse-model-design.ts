@@ -22,9 +22,12 @@ export function buildDesign(input: ValidatedInput): { design: DesignMatrix; resp
   const predictorScale = predictorTransformation(input.form);
   const columns = input.predictors.map((predictor) => transformColumn(predictor.name, predictor.values, predictorScale));
   const names = input.predictors.map((predictor) => predictor.name);
+  const lows = input.predictors.map((predictor) => predictor.lowPart ?? null);
+  const lowParts = lows.some((low) => low !== null) ? (input.intercept ? [null, ...lows] : lows) : undefined;
   const design: DesignMatrix = input.intercept
     ? { names: [INTERCEPT_NAME, ...names], columns: [new Float64Array(input.n).fill(1), ...columns], n: input.n, hasIntercept: true }
     : { names, columns, n: input.n, hasIntercept: false };
+  if (lowParts) design.lowParts = lowParts;
   return { design, response };
 }
 

@@ -136,7 +136,7 @@ function snapshotOf(
       : null;
   return {
     model: {
-      predictorNames: validated.predictors.map((predictor) => predictor.name),
+      ...pointLayout(validated.predictors),
       hasIntercept: validated.intercept,
       coefficients: model.solution.coefficients,
       covariance: covariance.matrix,
@@ -149,6 +149,21 @@ function snapshotOf(
     covariance: covariance.description,
     confidenceLevel: validated.confidenceLevel,
   };
+}
+
+/**
+ * The values a point gives: one per predictor; with power terms, one per distinct column (in order of
+ * first appearance), each design entry then being that value raised to its term's power.
+ */
+function pointLayout(predictors: ReturnType<typeof prepareModel>['input']['predictors']): Pick<PredictionModel, 'predictorNames' | 'terms'> {
+  if (!predictors.some((predictor) => predictor.term)) return { predictorNames: predictors.map((predictor) => predictor.name) };
+  const columns: string[] = [];
+  const terms = predictors.map((predictor) => {
+    const column = predictor.term ? predictor.term.column : predictor.name;
+    if (!columns.includes(column)) columns.push(column);
+    return { column: columns.indexOf(column), power: predictor.term ? predictor.term.power : 1 };
+  });
+  return { predictorNames: columns, terms };
 }
 
 export function predict(input: PredictionInput): PredictionResult & { covariance: CoefficientInference['covariance'] } {

@@ -7,7 +7,8 @@
 
 import { EngineError } from './errors';
 import { assertFinite, firstNonFinite, nonFiniteError } from './finite-values';
-import { FUNCTIONAL_FORMS, FunctionalForm } from './functional-forms';
+import { FUNCTIONAL_FORMS, FunctionalForm, predictorTransformation } from './functional-forms';
+import { powerTerms } from './polynomial-terms';
 
 export type ColumnValues = ArrayLike<number | null> | Float64Array;
 
@@ -16,8 +17,12 @@ export interface FitInput {
   columns: Record<string, ColumnValues>;
   /** Name of the response column. */
   response: string;
-  /** Names of the predictor columns, at least one. */
-  predictors: string[];
+  /**
+   * The predictors, at least one: a column name, or a power term { column, power } whose values the engine
+   * computes from the raw column in double-double (polynomial-terms.ts), so a polynomial keeps the digits
+   * that rounding each power to a double would lose. A power term's coefficient is named "column^power".
+   */
+  predictors: PredictorEntry[];
   /** Fit an intercept (default true). */
   intercept?: boolean;
   /** Name of a column of positive weights for weighted least squares. */
@@ -39,6 +44,46 @@ export interface ValidatedColumn {
   name: string;
   values: Float64Array;
   finiteChecked: boolean;
+  /** Power terms only: the low part of the double-double power (values + lowPart is x^k to ~32 digits). */
+  lowPart?: Float64Array;
+  /** Power terms only: the source column and the power. */
+  term?: PowerTerm;
+}
+
+export interface PowerTerm {
+  column: string;
+  power: number;
+}
+
+export type PredictorEntry = string | PowerTerm;
+
+/** Highest power a term may take (a degree-10 polynomial is the most demanding certified case). */
+export const MAX_TERM_POWER = 20;
+
+/** The coefficient name of a predictor entry: the column, or "column^power" for a power above 1. */
+export function predictorEntryName(entry: PredictorEntry): string {
+  return typeof entry === 'string' ? entry : entry.power === 1 ? entry.column : `${entry.column}^${entry.power}`;
+}
+
+/** The column a predictor entry reads. */
+export function predictorEntryColumn(entry: PredictorEntry): string {
+  return typeof entry === 'string' ? entry : entry.column;
+}
+
+function validatePredictorEntry(entry: unknown, index: number): PredictorEntry {
+  if (typeof entry === 'string') return entry;
+  const term = entry as Partial<PowerTerm> | null;
+  if (term === null || typeof term !== 'object' || typeof term.column !== 'string' || term.column.length === 0) {
+    throw new EngineError('invalid-argument', 'Every entry of "predictors" must be a column name or a power term { column, power }.', {
+      field: `predictors/${index}`,
+    });
+  }
+  if (!Number.isInteger(term.power) || (term.power as number) < 1 || (term.power as number) > MAX_TERM_POWER) {
+    throw new EngineError('invalid-argument', `The power of a term must be an integer from 1 to ${MAX_TERM_POWER}.`, {
+      field: `predictors/${index}/power`,
+    });
+  }
+  return { column: term.column, power: term.power as number };
 }
 
 export interface ValidatedInput {
@@ -83,28 +128,32 @@ export function validateFitInput(input: FitInput, options: { deferFiniteCheck?: 
       field: 'predictors',
     });
   }
+  const entries = input.predictors.map(validatePredictorEntry);
   const seen = new Set<string>();
-  for (const name of input.predictors) {
-    if (typeof name !== 'string') {
-      throw new EngineError('invalid-argument', 'Every entry of "predictors" must be a column name.', {
-        field: 'predictors',
-      });
-    }
+  entries.forEach((entry, index) => {
+    const name = predictorEntryName(entry);
     if (seen.has(name)) {
-      throw new EngineError('duplicate-column', `Column "${name}" is listed more than once in "predictors".`, {
+      throw new EngineError('duplicate-column', `Predictor "${name}" is listed more than once in "predictors".`, {
         column: name,
-        field: 'predictors',
+        field: `predictors/${index}`,
       });
     }
-    if (name === input.response) {
-      throw new EngineError('duplicate-column', `Column "${name}" is the response and cannot also be a predictor.`, {
-        column: name,
-        field: 'predictors',
+    if (predictorEntryColumn(entry) === input.response) {
+      throw new EngineError('duplicate-column', `Column "${predictorEntryColumn(entry)}" is the response and cannot also be a predictor.`, {
+        column: predictorEntryColumn(entry),
+        field: `predictors/${index}`,
       });
+    }
+    if (typeof entry !== 'string' && entry.power > 1 && predictorTransformation(form) === 'natural-log') {
+      throw new EngineError(
+        'invalid-argument',
+        `The ${form} form takes logs of the predictors, so the power term "${name}" would only repeat ln of its column; use lin-lin or log-lin with power terms.`,
+        { field: `predictors/${index}` },
+      );
     }
     seen.add(name);
-  }
-  const used = [input.response, ...input.predictors];
+  });
+  const used = [input.response, ...new Set(entries.map(predictorEntryColumn))];
   if (input.weights !== undefined) {
     if (typeof input.weights !== 'string') {
       throw new EngineError('invalid-argument', '"weights" must name a column.', { field: 'weights' });
@@ -130,7 +179,7 @@ export function validateFitInput(input: FitInput, options: { deferFiniteCheck?: 
     }
   }
   const response = toValidatedColumn(input.response, lookupColumn(columns, input.response));
-  const predictors = input.predictors.map((name) => toValidatedColumn(name, lookupColumn(columns, name)));
+  const predictors = entries.map((entry) => validatedPredictor(entry, columns));
   if (!options.deferFiniteCheck) for (const column of [response, ...predictors]) ensureFinite(column);
   let weights: ValidatedInput['weights'] = null;
   if (input.weights !== undefined) {
@@ -165,6 +214,20 @@ export function validateFitInput(input: FitInput, options: { deferFiniteCheck?: 
     form,
     confidenceLevel,
     includeObservations: input.includeObservations === true,
+  };
+}
+
+function validatedPredictor(entry: PredictorEntry, columns: FitInput['columns']): ValidatedColumn {
+  const column = toValidatedColumn(predictorEntryColumn(entry), lookupColumn(columns, predictorEntryColumn(entry)));
+  if (typeof entry === 'string' || entry.power === 1) return column;
+  ensureFinite(column);
+  const terms = powerTerms(column.values, entry.power);
+  return {
+    name: predictorEntryName(entry),
+    values: terms.columns[entry.power - 1] as Float64Array,
+    lowPart: terms.lowParts[entry.power - 1] as Float64Array,
+    finiteChecked: false,
+    term: entry,
   };
 }
 

@@ -113,7 +113,9 @@ export function fitValidated(input: ValidatedInput, presolved?: LeastSquaresSolu
   const names = input.predictors.map((p) => p.name);
   const terms = intercept ? [INTERCEPT_NAME, ...names] : names;
   const p = terms.length;
-  const straightLine = names.length === 1 && intercept && !weights && presolved === undefined;
+  const lows = input.predictors.map((predictor) => predictor.lowPart ?? null);
+  const hasLowParts = lows.some((low) => low !== null);
+  const straightLine = names.length === 1 && intercept && !weights && presolved === undefined && !hasLowParts;
   // The straight-line pass checks finiteness as it goes; every other route checks first.
   if (!straightLine) for (const column of [input.response, ...input.predictors]) ensureFinite(column);
   const y = transformColumn(input.response.name, input.response.values, responseTransform);
@@ -122,7 +124,7 @@ export function fitValidated(input: ValidatedInput, presolved?: LeastSquaresSolu
   const core =
     (straightLine &&
       solveStraightLine(xs[0] as Float64Array, y, names[0] as string, input.response.name, input.includeObservations)) ||
-    solveGeneral(xs, names, y, intercept, weights, input.includeObservations, presolved);
+    solveGeneral(xs, names, y, intercept, weights, input.includeObservations, presolved, hasLowParts ? lows : undefined);
 
   const fit = goodnessOfFit(n, p, intercept, core.residualSumOfSquares, core.totalSumOfSquares, input.response.name);
   const residualMeanSquare = fit.anova.residual.meanSquare;
@@ -225,13 +227,15 @@ function solveGeneral(
   weights: Float64Array | null,
   includeObservations: boolean,
   presolved?: LeastSquaresSolution,
+  lowParts?: (Float64Array | null)[],
 ): CoreSolution {
   const n = y.length;
   const columns = intercept ? [new Float64Array(n).fill(1), ...xs] : xs;
   const columnNames = intercept ? [INTERCEPT_NAME, ...names] : names;
+  const designLowParts = lowParts ? (intercept ? [null, ...lowParts] : lowParts) : undefined;
   const solution =
     presolved ??
-    solveLeastSquares({ names: columnNames, columns, n, hasIntercept: intercept }, y, {
+    solveLeastSquares({ names: columnNames, columns, n, hasIntercept: intercept, ...(designLowParts ? { lowParts: designLowParts } : {}) }, y, {
       ...(weights ? { weights } : {}),
       computeLeverage: includeObservations,
     });

@@ -9,16 +9,15 @@
  *  - fitModel with the design sent as plain doubles, the way a client sends data (polynomial terms
  *    x^k rounded to double). Required: LRE >= 9 on Norris, Pontius, NoInt1, NoInt2, Longley and
  *    Wampler1-3, >= 7 on Wampler4, Wampler5 and Filip (all eleven Filip terms kept).
- *  - solveLeastSquares with polynomial terms carried in double-double (powerTerms): removes the rounding
- *    of x^k from the data, which is what limits Filip in the first route. Required: LRE >= 9 everywhere.
+ *  - fitModel with power terms { column: 'x', power: k } (the route /v1/fits offers): the engine computes
+ *    x^k from the raw column in double-double, which removes the rounding of x^k that limits Filip in the
+ *    first route. Required: LRE >= 9 everywhere.
  */
 
 import * as fs from 'fs';
 import * as path from 'path';
 import { AnovaLine, goodnessOfFit, totalSumOfSquares } from './anova';
 import { fitModel } from './fit-model';
-import { INTERCEPT_NAME, solveLeastSquares } from './least-squares';
-import { powerTerms } from './polynomial-terms';
 
 interface CertifiedLine {
   df: number;
@@ -130,43 +129,29 @@ function viaFitModel(dataset: NistDataset): Computed {
   };
 }
 
-function viaExtendedPowers(dataset: NistDataset): Computed {
-  const n = dataset.n_observations;
-  const y = Float64Array.from(dataset.data.y);
-  const names: string[] = [];
-  const columns: Float64Array[] = [];
-  const lowParts: (Float64Array | null)[] = [];
-  if (dataset.model.intercept) {
-    names.push(INTERCEPT_NAME);
-    columns.push(new Float64Array(n).fill(1));
-    lowParts.push(null);
-  }
-  if (dataset.data.degree !== undefined && dataset.data.x) {
-    const terms = powerTerms(dataset.data.x, dataset.data.degree);
-    terms.columns.forEach((column, k) => {
-      names.push(`x^${k + 1}`);
-      columns.push(column);
-      lowParts.push(terms.lowParts[k] ?? null);
-    });
-  } else {
-    for (const [name, column] of Object.entries(predictorColumns(dataset))) {
-      names.push(name);
-      columns.push(column);
-      lowParts.push(null);
-    }
-  }
-  const solution = solveLeastSquares({ names, columns, n, hasIntercept: dataset.model.intercept, lowParts }, y);
-  const p = columns.length;
-  const fit = goodnessOfFit(n, p, dataset.model.intercept, solution.residualSumOfSquares, totalSumOfSquares(y, null, dataset.model.intercept), 'y');
-  const residualSd = Math.sqrt(fit.anova.residual.meanSquare);
+/** fitModel with power terms { column: 'x', power: k }: the engine computes x^k from the raw column. */
+function viaPowerTerms(dataset: NistDataset): Computed {
+  const polynomial = dataset.data.degree !== undefined && dataset.data.x;
+  const columns: Record<string, Float64Array> = polynomial
+    ? { x: Float64Array.from(dataset.data.x as number[]) }
+    : predictorColumns(dataset);
+  const predictors = polynomial
+    ? Array.from({ length: dataset.data.degree as number }, (_, k) => ({ column: 'x', power: k + 1 }))
+    : Object.keys(columns);
+  const result = fitModel({
+    columns: { ...columns, y: Float64Array.from(dataset.data.y) },
+    response: 'y',
+    predictors,
+    intercept: dataset.model.intercept,
+  });
   return {
-    estimates: Array.from(solution.coefficients),
-    standardErrors: solution.unscaledCovariance.map((row, j) => residualSd * Math.sqrt(row[j]!)),
-    residualSd,
-    rSquared: fit.rSquared,
-    regression: fit.anova.regression,
-    residual: fit.anova.residual,
-    fStatistic: fit.anova.fStatistic,
+    estimates: result.coefficients.map((c) => c.estimate),
+    standardErrors: result.coefficients.map((c) => c.standardError),
+    residualSd: result.residualStandardError,
+    rSquared: result.rSquared,
+    regression: result.anova.regression,
+    residual: result.anova.residual,
+    fStatistic: result.anova.fStatistic,
   };
 }
 
@@ -186,7 +171,7 @@ describe('NIST StRD linear regression (certified values, LRE)', () => {
   afterAll(() => {
     console.log(
       `${formatTable('Minimum LRE per group, design sent as doubles (fitModel):', plain)}\n\n` +
-        formatTable('Minimum LRE per group, polynomial terms in double-double (solveLeastSquares + powerTerms):', extended),
+        formatTable('Minimum LRE per group, polynomial power terms computed by the engine (fitModel with { column, power }):', extended),
     );
   });
 
@@ -203,9 +188,9 @@ describe('NIST StRD linear regression (certified values, LRE)', () => {
     }
   });
 
-  it.each(DATASETS)('%s: with double-double polynomial terms every certified value reaches LRE 9', (name) => {
+  it.each(DATASETS)('%s: with power terms computed by the engine every certified value reaches LRE 9', (name) => {
     const dataset = load(name);
-    const row = scoreAgainstCertificate(dataset, viaExtendedPowers(dataset));
+    const row = scoreAgainstCertificate(dataset, viaPowerTerms(dataset));
     extended.push([name, row]);
     for (const value of Object.values(row)) expect(value).toBeGreaterThanOrEqual(9);
   });

@@ -33,8 +33,13 @@ import { bilinear, SquareMatrix } from './diagnostics/small-matrix';
 import { evaluateAtPoint, WorkingPredictionModel } from './working-coordinates';
 
 export interface PredictionModel {
-  /** Predictor names in the order the points give their values. */
+  /** Names of the values a point gives, in order: the predictors, or the distinct columns when `terms` is set. */
   predictorNames: string[];
+  /**
+   * Power terms: design entry k (after the intercept) is point[terms[k].column] ^ terms[k].power. Absent
+   * when every predictor is a plain column (the point then gives one value per predictor).
+   */
+  terms?: { column: number; power: number }[];
   hasIntercept: boolean;
   /** Coefficients in design order (intercept first when present). */
   coefficients: ArrayLike<number>;
@@ -104,7 +109,7 @@ export function predictAt(model: PredictionModel, points: unknown, confidenceLev
         { field: 'points', row },
       );
     }
-    const x: number[] = model.hasIntercept ? [1] : [];
+    const values: number[] = [];
     const named: Record<string, number> = {};
     point.forEach((value: unknown, j: number) => {
       const name = model.predictorNames[j]!;
@@ -123,8 +128,14 @@ export function predictAt(model: PredictionModel, points: unknown, confidenceLev
         );
       }
       named[name] = value;
-      x.push(logPredictors ? Math.log(value) : value);
+      values.push(logPredictors ? Math.log(value) : value);
     });
+    const x: number[] = model.hasIntercept ? [1] : [];
+    if (model.terms) for (const term of model.terms) x.push(Math.pow(values[term.column]!, term.power));
+    else x.push(...values);
+    if (!x.every(Number.isFinite)) {
+      throw new EngineError('non-finite-value', `Point ${row} (0-based) raises a value to a power too large to represent.`, { row, field: 'points' });
+    }
     let estimate = 0;
     let meanVariance = 0;
     if (model.working) {
