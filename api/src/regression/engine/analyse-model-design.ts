@@ -11,6 +11,7 @@ import { FitInput, validateFitInput, ValidatedInput } from './fit-input';
 import { predictorTransformation, responseTransformation, transformColumn } from './functional-forms';
 import { DesignMatrix, INTERCEPT_NAME, solveLeastSquares } from './least-squares';
 import { FittedModel } from './diagnostics/model-context';
+import { assertResponseRepresentable } from './representable';
 
 export interface PreparedModel {
   input: ValidatedInput;
@@ -36,5 +37,6 @@ export function prepareModel(fitInput: FitInput): PreparedModel {
   const { design, response } = buildDesign(input);
   const weights = input.weights?.values;
   const solution = solveLeastSquares(design, response, { ...(weights ? { weights } : {}), computeLeverage: true });
+  assertResponseRepresentable(solution.residualSumOfSquares, input.response.name);
   return { input, model: { design, response, solution, ...(weights ? { weights } : {}) } };
 }

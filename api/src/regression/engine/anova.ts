@@ -88,6 +88,14 @@ export function goodnessOfFit(
   totalSum: number,
   responseName: string,
 ): GoodnessOfFit {
+  if (Number.isNaN(totalSum) || totalSum === Infinity) {
+    throw new EngineError(
+      'magnitude-out-of-range',
+      `The response "${responseName}" is so large (|y| near 1e154 or above) that its sum of squares exceeds the double ` +
+        'range, so R² and the ANOVA table cannot be represented; rescale it (for example to thousands or millions).',
+      { column: responseName },
+    );
+  }
   if (!(totalSum > 0)) {
     throw new EngineError(
       'constant-response',

@@ -12,6 +12,7 @@
  */
 
 import type { CoefficientEstimate } from './coefficient-inference';
+import { assertRepresentable } from './representable';
 import { studentTInverseSurvival, studentTTwoSidedPValue, fisherFSurvival } from './distributions';
 import { CoefficientCovariance, CovarianceDescription } from './covariance';
 import { cholesky, choleskySolve, SquareMatrix } from './diagnostics/small-matrix';
@@ -39,6 +40,8 @@ export interface CoefficientInference {
   confidenceLevel: number;
   coefficients: CoefficientRow[];
   waldTest: WaldTest | null;
+  /** Relative error bound of each standard error in `coefficients` (accuracy.ts); absent for batch fits. */
+  standardErrorAccuracy?: (number | null)[];
 }
 
 export function coefficientInference(
@@ -65,11 +68,13 @@ export function coefficientInference(
       confidenceInterval: { lower: estimate - critical * standardError, upper: estimate + critical * standardError },
     };
   });
+  assertRepresentable(rows.map((row) => row.standardError), design.names);
   return {
     covariance: covariance.description,
     confidenceLevel,
     coefficients: rows,
     waldTest: waldTest(design, coefficients, covariance.matrix, df),
+    ...(covariance.standardErrorBounds ? { standardErrorAccuracy: covariance.standardErrorBounds } : {}),
   };
 }
 

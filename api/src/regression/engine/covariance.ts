@@ -26,6 +26,7 @@ import { neweyWestMeat, resolveNeweyWestLag } from './covariance-newey-west';
 import { heteroskedasticMeat, scoreFactors } from './covariance-scores';
 import { mapWorkingMatrix, OuterSum, RowVectors, rowVectors } from './working-coordinates';
 import { ddAdd, twoProduct } from './double-double';
+import { standardErrorAccuracy } from './accuracy';
 
 export const COVARIANCE_TYPES = ['classical', 'hc0', 'hc1', 'hc2', 'hc3', 'newey-west', 'cluster'] as const;
 export type CovarianceType = (typeof COVARIANCE_TYPES)[number];
@@ -60,6 +61,8 @@ export interface CoefficientCovariance {
   /** The same covariance for the working coefficients g (b = M g); predictions use it. */
   workingMatrix?: SquareMatrix;
   workingMatrixLow?: SquareMatrix;
+  /** Relative error bound of each standard error sqrt(V_jj) (accuracy.ts); null where none is claimed. */
+  standardErrorBounds?: (number | null)[];
   description: CovarianceDescription;
 }
 
@@ -94,7 +97,13 @@ export function coefficientCovariance(model: FittedModel, request: CovarianceReq
     const variance = solution.residualSumOfSquares / residualDegreesOfFreedom;
     const bread = workingBread(model);
     const working = scaleDoubleDouble(bread.hi, bread.lo, variance);
-    return { matrix: scale(solution.unscaledCovariance, variance), workingMatrix: working.hi, workingMatrixLow: working.lo, description: base };
+    return {
+      matrix: scale(solution.unscaledCovariance, variance),
+      workingMatrix: working.hi,
+      workingMatrixLow: working.lo,
+      standardErrorBounds: standardErrorAccuracy(solution, new Float64Array(p).fill(1), 'none'),
+      description: base,
+    };
   }
   const vectors = rowVectors(solution, model.weights);
   const scores = scoreFactors(model);
@@ -122,7 +131,7 @@ export function coefficientCovariance(model: FittedModel, request: CovarianceReq
     const { lag, rule } = resolveNeweyWestLag(request.lag, n);
     const factor = request.smallSampleCorrection === true ? n / residualDegreesOfFreedom : 1;
     return {
-      ...sandwichOf(model, vectors, (a) => neweyWestMeat(a, scores, lag), factor),
+      ...sandwichOf(model, vectors, (a) => neweyWestMeat(a, scores, lag), factor, neweyWestTermRatio(scores, lag)),
       description: { ...base, lag, lagRule: rule, kernel: 'bartlett', smallSampleFactor: factor },
     };
   }
@@ -134,7 +143,7 @@ export function coefficientCovariance(model: FittedModel, request: CovarianceReq
   const { index, count } = indexGroups(request.groups, n);
   const factor = clusterFactor(count, n, p);
   return {
-    ...sandwichOf(model, vectors, (a) => clusterMeat(a, scores, index, count), factor),
+    ...sandwichOf(model, vectors, (a) => clusterMeat(a, scores, index, count), factor, clusterTermRatio(scores, index, count)),
     description: { ...base, clusterCount: count, smallSampleFactor: factor, inferenceDegreesOfFreedom: count - 1 },
   };
 }
@@ -177,9 +186,47 @@ function sandwichOf(
   vectors: RowVectors,
   meat: (rows: Float64Array[]) => OuterSum,
   factor: number,
-): { matrix: SquareMatrix; workingMatrix: SquareMatrix; workingMatrixLow: SquareMatrix } {
+  termRatio?: (rows: Float64Array[], matrix: SquareMatrix) => Float64Array,
+): { matrix: SquareMatrix; workingMatrix: SquareMatrix; workingMatrixLow: SquareMatrix; standardErrorBounds: (number | null)[] } {
   const workingSum = meat(vectors.working);
   const working = scaleDoubleDouble(workingSum.matrix(), workingSum.lowMatrix(), factor);
   const matrix = vectors.exact ? scale(meat(vectors.design).matrix(), factor) : mapWorkingMatrix(model.solution.working.design, working.hi);
-  return { matrix, workingMatrix: working.hi, workingMatrixLow: working.lo };
+  const p = matrix.length;
+  const ratios = vectors.exact && termRatio ? termRatio(vectors.design, scale(matrix, 1 / factor)) : new Float64Array(p).fill(1);
+  const standardErrorBounds = standardErrorAccuracy(model.solution, ratios, vectors.exact ? 'row-vectors' : 'mapped');
+  return { matrix, workingMatrix: working.hi, workingMatrixLow: working.lo, standardErrorBounds };
+}
+
+/** sum |terms| / |V_jj| of a Newey-West diagonal: the cross terms may cancel. */
+function neweyWestTermRatio(scores: Float64Array, lag: number): (rows: Float64Array[], matrix: SquareMatrix) => Float64Array {
+  return (rows, matrix) => {
+    const p = matrix.length;
+    const ratio = new Float64Array(p);
+    for (let j = 0; j < p; j++) {
+      let total = 0;
+      for (let t = 0; t < rows.length; t++) total += (scores[t]! * rows[t]![j]!) ** 2;
+      for (let l = 1; l <= lag; l++) {
+        const weight = 1 - l / (lag + 1);
+        for (let t = l; t < rows.length; t++) total += 2 * weight * Math.abs(scores[t]! * rows[t]![j]! * scores[t - l]! * rows[t - l]![j]!);
+      }
+      ratio[j] = total / Math.abs(matrix[j]![j]!);
+    }
+    return ratio;
+  };
+}
+
+/** sum_g (sum_{i in g} |f_i a_ij|)^2 / V_jj for a cluster diagonal. */
+function clusterTermRatio(scores: Float64Array, index: Int32Array, count: number): (rows: Float64Array[], matrix: SquareMatrix) => Float64Array {
+  return (rows, matrix) => {
+    const p = matrix.length;
+    const ratio = new Float64Array(p);
+    for (let j = 0; j < p; j++) {
+      const sums = new Float64Array(count);
+      for (let i = 0; i < rows.length; i++) sums[index[i]!]! += Math.abs(scores[i]! * rows[i]![j]!);
+      let total = 0;
+      for (let g = 0; g < count; g++) total += sums[g]! * sums[g]!;
+      ratio[j] = total / Math.abs(matrix[j]![j]!);
+    }
+    return ratio;
+  };
 }

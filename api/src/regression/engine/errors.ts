@@ -23,6 +23,7 @@ export const ENGINE_ERROR_CODES = [
   'invalid-confidence-level',
   'unknown-form',
   'invalid-argument',
+  'magnitude-out-of-range',
   'no-form-fits',
 ] as const;
 

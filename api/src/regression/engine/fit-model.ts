@@ -12,6 +12,7 @@
  * t-statistics of a perfect fit, for example) are null, never NaN or Infinity.
  */
 
+import { assertRepresentable, assertResponseRepresentable } from './representable';
 import { AnovaTable, goodnessOfFit, RSquaredDefinition, totalSumOfSquares } from './anova';
 import { CoefficientEstimate, coefficientTable } from './coefficient-inference';
 import { ensureFinite, FitInput, validateFitInput, ValidatedInput } from './fit-input';
@@ -30,6 +31,7 @@ import { INTERCEPT_NAME, LeastSquaresMethod, LeastSquaresSolution, solveLeastSqu
 import { fitSimpleLine, simpleLineObservations } from './simple-regression';
 import { backTransform, smearingFactor } from './smearing';
 import { ENGINE_VERSION } from './version';
+import { AccuracyReport, coefficientAccuracy, standardErrorAccuracy } from './accuracy';
 
 export interface ObservationResults {
   /** Fitted values on the model's scale. */
@@ -82,7 +84,13 @@ export interface FitResult {
   effects: CoefficientEffect[];
   originalScale: OriginalScaleSummary | null;
   observations?: ObservationResults;
-  numerics: { method: LeastSquaresMethod | 'straight-line'; conditionNumber: number | null; refinementSteps: number };
+  numerics: {
+    method: LeastSquaresMethod | 'straight-line';
+    conditionNumber: number | null;
+    refinementSteps: number;
+    /** A-posteriori relative error bounds of the coefficients and classical standard errors (accuracy.ts). */
+    accuracy: AccuracyReport | null;
+  };
 }
 
 interface CoreSolution {
@@ -94,6 +102,9 @@ interface CoreSolution {
   residualsForSmearing: () => Float64Array;
   numerics: FitResult['numerics'];
 }
+
+/** Below this many rows a one-predictor fit goes through the refined solver (and states its accuracy). */
+export const STRAIGHT_LINE_MIN_ROWS = 100_000;
 
 export function fitModel(input: FitInput): FitResult {
   return fitValidated(validateFitInput(input, { deferFiniteCheck: true }));
@@ -115,7 +126,9 @@ export function fitValidated(input: ValidatedInput, presolved?: LeastSquaresSolu
   const p = terms.length;
   const lows = input.predictors.map((predictor) => predictor.lowPart ?? null);
   const hasLowParts = lows.some((low) => low !== null);
-  const straightLine = names.length === 1 && intercept && !weights && presolved === undefined && !hasLowParts;
+  // The single-pass straight line is kept for long series, where its speed matters; shorter ones take the
+  // refined solver, whose answers carry an a-posteriori accuracy bound (accuracy.ts).
+  const straightLine = names.length === 1 && intercept && !weights && presolved === undefined && !hasLowParts && n > STRAIGHT_LINE_MIN_ROWS;
   // The straight-line pass checks finiteness as it goes; every other route checks first.
   if (!straightLine) for (const column of [input.response, ...input.predictors]) ensureFinite(column);
   const y = transformColumn(input.response.name, input.response.values, responseTransform);
@@ -126,6 +139,7 @@ export function fitValidated(input: ValidatedInput, presolved?: LeastSquaresSolu
       solveStraightLine(xs[0] as Float64Array, y, names[0] as string, input.response.name, input.includeObservations)) ||
     solveGeneral(xs, names, y, intercept, weights, input.includeObservations, presolved, hasLowParts ? lows : undefined);
 
+  assertResponseRepresentable(core.residualSumOfSquares, input.response.name);
   const fit = goodnessOfFit(n, p, intercept, core.residualSumOfSquares, core.totalSumOfSquares, input.response.name);
   const residualMeanSquare = fit.anova.residual.meanSquare;
   const residualDf = n - p;
@@ -137,6 +151,7 @@ export function fitValidated(input: ValidatedInput, presolved?: LeastSquaresSolu
     residualDf,
     confidenceLevel,
   );
+  assertRepresentable(coefficients.map((c) => c.standardError), terms);
   const criteria = informationCriteria(n, p, core.residualSumOfSquares, weights);
   const effects = coefficients
     .filter((c) => c.term !== INTERCEPT_NAME || !intercept)
@@ -215,7 +230,7 @@ function solveStraightLine(
     totalSumOfSquares: line.totalSumOfSquares,
     observations: includeObservations ? observations : null,
     residualsForSmearing: () => observations().residuals,
-    numerics: { method: 'straight-line', conditionNumber: null, refinementSteps: 0 },
+    numerics: { method: 'straight-line', conditionNumber: null, refinementSteps: 0, accuracy: null },
   };
 }
 
@@ -254,6 +269,15 @@ function solveGeneral(
       method: solution.method,
       conditionNumber: solution.conditionNumber,
       refinementSteps: solution.refinementSteps,
+      accuracy: {
+        coefficients: coefficientAccuracy(solution, y, weights ?? undefined),
+        standardErrors: standardErrorAccuracy(solution, new Float64Array(columns.length).fill(1), 'none'),
+      },
     },
   };
 }
+
+/**
+ * A variance beyond the double range (a predictor near 1e-160 has a slope near 1e160 whose variance is
+ * 1e320) cannot be reported: the column must be rescaled. Raised instead of answering Infinity or NaN.
+ */

@@ -92,12 +92,11 @@ export function prepareWorkingDesign(
     const moments = columnMoments(column, weights, weightTotal, hasIntercept);
     if (!moments) {
       assertFinite(name, column);
-      throw new EngineError('invalid-argument', `Column "${name}" holds values too large to square (above 1e154).`, {
+      throw new EngineError('magnitude-out-of-range', `Column "${name}" holds values too large to work with (above about 1e300); rescale it.`, {
         column: name,
       });
     }
-    const centredNorm = Math.sqrt(moments.centredSquares);
-    const rawNorm = Math.sqrt(moments.rawSquares);
+    const { centredNorm, rawNorm } = moments;
     if (!(rawNorm > 0)) {
       throw new EngineError('zero-column', `Column "${name}" is zero in every row, so it cannot be estimated.`, {
         column: name,
@@ -134,8 +133,9 @@ export function prepareWorkingDesign(
 
 interface ColumnMoments {
   mean: number;
-  centredSquares: number;
-  rawSquares: number;
+  /** sqrt of the (weighted) centred and raw sums of squares, formed without overflow. */
+  centredNorm: number;
+  rawNorm: number;
 }
 
 /**
@@ -150,45 +150,59 @@ function columnMoments(
   weightTotal: number,
   centre: boolean,
 ): ColumnMoments | null {
+  // Scale by a power of two near the largest magnitude first (exact), so squares neither underflow for
+  // |x| near 1e-160 nor overflow for |x| near 1e160; the moments are scaled back at the end.
   const n = column.length;
+  let largest = 0;
+  for (let i = 0; i < n; i++) {
+    const magnitude = Math.abs(column[i]!);
+    if (magnitude > largest) largest = magnitude;
+  }
+  if (!Number.isFinite(largest)) return null;
+  if (largest === 0) return { mean: 0, centredNorm: 0, rawNorm: 0 };
+  const exponent = Math.round(Math.log2(largest));
+  const down = Math.pow(2, -Math.max(-1000, Math.min(1000, exponent)));
+  const up = 1 / down;
   let sum = 0;
   let rawSquares = 0;
   if (weights) {
     for (let i = 0; i < n; i++) {
-      const wx = weights[i]! * column[i]!;
+      const x = column[i]! * down;
+      const wx = weights[i]! * x;
       sum += wx;
-      rawSquares += wx * column[i]!;
+      rawSquares += wx * x;
     }
   } else {
     for (let i = 0; i < n; i++) {
-      const x = column[i]!;
+      const x = column[i]! * down;
       sum += x;
       rawSquares += x * x;
     }
   }
   if (!Number.isFinite(sum + rawSquares)) return null;
-  if (!centre) return { mean: 0, centredSquares: rawSquares, rawSquares };
+  const rawNorm = Math.sqrt(rawSquares) * up;
+  if (!centre) return { mean: 0, centredNorm: rawNorm, rawNorm };
   const provisional = sum / weightTotal;
   let deviationSum = 0;
   let deviationSquares = 0;
   if (weights) {
     for (let i = 0; i < n; i++) {
-      const d = column[i]! - provisional;
+      const d = column[i]! * down - provisional;
       const wd = weights[i]! * d;
       deviationSum += wd;
       deviationSquares += wd * d;
     }
   } else {
     for (let i = 0; i < n; i++) {
-      const d = column[i]! - provisional;
+      const d = column[i]! * down - provisional;
       deviationSum += d;
       deviationSquares += d * d;
     }
   }
   return {
-    mean: provisional + deviationSum / weightTotal,
-    centredSquares: Math.max(0, deviationSquares - (deviationSum * deviationSum) / weightTotal),
-    rawSquares,
+    mean: (provisional + deviationSum / weightTotal) * up,
+    centredNorm: Math.sqrt(Math.max(0, deviationSquares - (deviationSum * deviationSum) / weightTotal)) * up,
+    rawNorm,
   };
 }
 

@@ -1,4 +1,4 @@
-import { ApiProperty } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { COVARIANCE_TYPES, CovarianceType } from '../../engine/covariance';
 import { IntervalDto } from './coefficient-estimate.dto';
 
@@ -161,4 +161,15 @@ export class CoefficientInferenceDto {
       'with more tested terms than G − 1, or a perfect fit.',
   })
   waldTest: WaldTestDto | null;
+
+  @ApiPropertyOptional({
+    type: 'array',
+    items: { type: 'number', nullable: true },
+    description:
+      'Upper bound on the relative error of each standard error above, for the numbers sent (see fit.numerics.accuracy); ' +
+      'null entries where no bound is claimed (very ill-conditioned designs, or sandwich covariances of problems with ' +
+      'n·p² above 4e6, summed in working coordinates).',
+    example: [6.7e-16, 6.7e-16],
+  })
+  standardErrorAccuracy?: (number | null)[];
 }

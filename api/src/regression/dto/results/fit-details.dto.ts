@@ -208,4 +208,36 @@ export class FitNumericsDto {
     example: 0,
   })
   refinementSteps: number;
+
+  @ApiProperty({
+    type: () => AccuracyReportDto,
+    nullable: true,
+    description:
+      'How exact this answer is: a bound on the relative error of every coefficient and classical standard error, ' +
+      'computed after the fact from the answer itself. Null on the single-pass straight-line path (one predictor, ' +
+      'more than 100,000 rows).',
+  })
+  accuracy: AccuracyReportDto | null;
+}
+
+/** A-posteriori relative error bounds, one per coefficient in design order. */
+export class AccuracyReportDto {
+  @ApiProperty({
+    type: 'array',
+    items: { type: 'number', nullable: true },
+    description:
+      'Upper bound on |reported − exact| / |exact| for each coefficient, where "exact" is the least-squares solution ' +
+      'for the very numbers sent. From the double-double residual of the reported coefficients and the working ' +
+      'covariance; null when the working problem is too ill-conditioned (condition number above about 9e12) to claim one.',
+    example: [2.4e-16, 1.2e-16],
+  })
+  coefficients: (number | null)[];
+
+  @ApiProperty({
+    type: 'array',
+    items: { type: 'number', nullable: true },
+    description: 'The same bound for each standard error of the table it accompanies.',
+    example: [4.4e-16, 4.4e-16],
+  })
+  standardErrors: (number | null)[];
 }

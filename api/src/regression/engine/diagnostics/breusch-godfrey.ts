@@ -17,7 +17,7 @@
 
 import { AnalysisError } from './analysis-error';
 import { fitAuxiliary } from './auxiliary-regression';
-import { FittedModel, modelRegressors, whitenedResiduals } from './model-context';
+import { FittedModel, modelRegressors, scaledWhitenedResiduals } from './model-context';
 import { chiSquareOutcome, fisherFOutcome, requireImperfectFit, requireResidualVariation, TestOutcome } from './test-outcome';
 
 export type BreuschGodfreyVariant = 'lm' | 'f';
@@ -35,7 +35,7 @@ export function breuschGodfreyTest(
   lag: number = DEFAULT_BREUSCH_GODFREY_LAG,
   variant: BreuschGodfreyVariant = 'lm',
 ): BreuschGodfreyResult {
-  const residuals = whitenedResiduals(model);
+  const residuals = scaledWhitenedResiduals(model);
   const n = residuals.length;
   const p = model.design.columns.length;
   if (!Number.isInteger(lag) || lag < 1) {

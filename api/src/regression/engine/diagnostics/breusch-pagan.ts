@@ -17,7 +17,7 @@
 
 import { AnalysisError } from './analysis-error';
 import { fitAuxiliary } from './auxiliary-regression';
-import { FittedModel, nonConstantRegressors, whitenedResiduals } from './model-context';
+import { FittedModel, nonConstantRegressors, scaledWhitenedResiduals } from './model-context';
 import { chiSquareOutcome, requireImperfectFit, TestOutcome } from './test-outcome';
 
 export type BreuschPaganVariant = 'studentised' | 'original';
@@ -33,7 +33,7 @@ export function breuschPaganTest(
   significanceLevel: number,
   variant: BreuschPaganVariant = 'studentised',
 ): BreuschPaganResult {
-  const residuals = whitenedResiduals(model);
+  const residuals = scaledWhitenedResiduals(model);
   const n = residuals.length;
   const squares = residuals.map((value) => value * value);
   let residualSquareTotal = 0;

@@ -20,7 +20,7 @@
 
 import { incompleteBeta } from '../special-functions';
 import { AnalysisError } from './analysis-error';
-import { FittedModel, whitenedResiduals, workingColumns } from './model-context';
+import { FittedModel, scaledWhitenedResiduals, workingColumns } from './model-context';
 import { multiply, SquareMatrix, trace, zeroMatrix } from './small-matrix';
 import { requireImperfectFit, requireResidualVariation, TestOutcome } from './test-outcome';
 
@@ -99,7 +99,7 @@ export function durbinWatsonTest(
   alternative: SerialCorrelationAlternative = 'positive',
 ): DurbinWatsonResult {
   requireImperfectFit(model, 'Durbin-Watson test');
-  const residuals = whitenedResiduals(model);
+  const residuals = scaledWhitenedResiduals(model);
   const n = residuals.length;
   const statistic = durbinWatsonStatistic(residuals);
   // The hat matrix from the working design A = S Z and its (A'A)^-1: the same projection as from the

@@ -8,7 +8,7 @@
  * residuals are used. K is the raw kurtosis (3 for a normal distribution), not the excess.
  */
 
-import { FittedModel, whitenedResiduals } from './model-context';
+import { FittedModel, scaledWhitenedResiduals } from './model-context';
 import { chiSquareOutcome, requireImperfectFit, requireResidualVariation, TestOutcome } from './test-outcome';
 
 export interface JarqueBeraResult extends TestOutcome {
@@ -41,7 +41,7 @@ export function momentShape(values: ArrayLike<number>): { skewness: number; kurt
 
 export function jarqueBeraTest(model: FittedModel, significanceLevel: number): JarqueBeraResult {
   requireImperfectFit(model, 'Jarque-Bera test');
-  const residuals = whitenedResiduals(model);
+  const residuals = scaledWhitenedResiduals(model);
   const n = residuals.length;
   const { skewness, kurtosis } = momentShape(residuals);
   const excess = kurtosis - 3;

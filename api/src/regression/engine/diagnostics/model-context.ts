@@ -35,6 +35,22 @@ export function whitenedResiduals(model: FittedModel): Float64Array {
   return result;
 }
 
+/**
+ * The whitened residuals divided by a power of two near their largest magnitude (an exact scaling). Every
+ * residual-based statistic here is invariant to rescaling the residuals (ratios such as R², skewness,
+ * kurtosis, Durbin-Watson), while squares and fourth powers of raw residuals near 1e144 or 1e-144 would
+ * overflow or underflow.
+ */
+export function scaledWhitenedResiduals(model: FittedModel): Float64Array {
+  const residuals = Float64Array.from(whitenedResiduals(model));
+  let largest = 0;
+  for (let i = 0; i < residuals.length; i++) largest = Math.max(largest, Math.abs(residuals[i]!));
+  if (!(largest > 0) || !Number.isFinite(largest)) return residuals;
+  const inverse = Math.pow(2, -Math.round(Math.log2(largest)));
+  for (let i = 0; i < residuals.length; i++) residuals[i]! *= inverse;
+  return residuals;
+}
+
 /** The design's columns multiplied row-wise by sqrt(w); the columns themselves when unweighted. */
 export function whitenedColumns(model: FittedModel): Float64Array[] {
   const { weights } = model;

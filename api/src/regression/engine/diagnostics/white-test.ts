@@ -12,7 +12,7 @@
 
 import { AnalysisError } from './analysis-error';
 import { fitAuxiliary } from './auxiliary-regression';
-import { FittedModel, nonConstantRegressors, whitenedResiduals } from './model-context';
+import { FittedModel, nonConstantRegressors, scaledWhitenedResiduals } from './model-context';
 import { chiSquareOutcome, requireImperfectFit, TestOutcome } from './test-outcome';
 
 export interface WhiteResult extends TestOutcome {
@@ -21,7 +21,7 @@ export interface WhiteResult extends TestOutcome {
 }
 
 export function whiteTest(model: FittedModel, significanceLevel: number): WhiteResult {
-  const residuals = whitenedResiduals(model);
+  const residuals = scaledWhitenedResiduals(model);
   const n = residuals.length;
   const squares = residuals.map((value) => value * value);
   requireImperfectFit(model, 'White test');
