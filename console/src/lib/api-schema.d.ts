@@ -1570,6 +1570,24 @@ export interface components {
             /** @description Log-y forms only: exp(ŷ_i) times Duan’s smearing factor, an estimate of the mean of y_i on its original scale. */
             fittedOriginalScaleSmeared?: number[];
         };
+        AccuracyReportDto: {
+            /**
+             * @description Upper bound on |reported − exact| / |exact| for each coefficient, where "exact" is the least-squares solution for the very numbers sent. From the double-double residual of the reported coefficients and the working covariance; null when the working problem is too ill-conditioned (condition number above about 9e12) to claim one.
+             * @example [
+             *       2.4e-16,
+             *       1.2e-16
+             *     ]
+             */
+            coefficients: (number | null)[];
+            /**
+             * @description The same bound for each standard error of the table it accompanies.
+             * @example [
+             *       4.4e-16,
+             *       4.4e-16
+             *     ]
+             */
+            standardErrors: (number | null)[];
+        };
         FitNumericsDto: {
             /**
              * @description householder-refined: Householder QR of the centred, power-of-two-scaled design with iterative refinement in double-double. tall-skinny: blocked tall-skinny QR, used when n·p > 2²¹ (a tall problem whose condition number exceeds 1e4 is handed to the refined solver and reported as householder-refined). straight-line: one predictor with an intercept and no weights, solved from one pass of shifted sums.
@@ -1587,6 +1605,8 @@ export interface components {
              * @example 0
              */
             refinementSteps: number;
+            /** @description How exact this answer is: a bound on the relative error of every coefficient and classical standard error, computed after the fact from the answer itself. Null on the single-pass straight-line path (one predictor, more than 100,000 rows). */
+            accuracy: components["schemas"]["AccuracyReportDto"] | null;
         };
         FitResultDto: {
             /**
@@ -1795,6 +1815,14 @@ export interface components {
             coefficients: components["schemas"]["CoefficientRowDto"][];
             /** @description Wald F-test that every slope is 0. Null when RVR′ is not positive definite, for example a cluster covariance with more tested terms than G − 1, or a perfect fit. */
             waldTest: components["schemas"]["WaldTestDto"] | null;
+            /**
+             * @description Upper bound on the relative error of each standard error above, for the numbers sent (see fit.numerics.accuracy); null entries where no bound is claimed (very ill-conditioned designs, or sandwich covariances of problems with n·p² above 4e6, summed in working coordinates).
+             * @example [
+             *       6.7e-16,
+             *       6.7e-16
+             *     ]
+             */
+            standardErrorAccuracy?: (number | null)[];
             /**
              * @description n: rows used in the fit.
              * @example 200
@@ -2233,7 +2261,7 @@ export interface components {
              * @example invalid-argument
              * @enum {string}
              */
-            code: "empty-input" | "length-mismatch" | "missing-column" | "duplicate-column" | "non-finite-value" | "too-few-observations" | "constant-column" | "constant-response" | "zero-column" | "collinear-columns" | "non-positive-log-argument" | "non-positive-weight" | "invalid-confidence-level" | "unknown-form" | "invalid-argument" | "no-form-fits";
+            code: "empty-input" | "length-mismatch" | "missing-column" | "duplicate-column" | "non-finite-value" | "too-few-observations" | "constant-column" | "constant-response" | "zero-column" | "collinear-columns" | "non-positive-log-argument" | "non-positive-weight" | "invalid-confidence-level" | "unknown-form" | "invalid-argument" | "magnitude-out-of-range" | "no-form-fits";
             /**
              * @description The exact reason when code is invalid-argument: usually perfect-fit (the residuals are rounding noise, ‖e‖ ≤ 1e-12·‖y‖ in weighted norms) or test-not-defined (the check’s definition cannot be met for this model). Null for other codes.
              * @example perfect-fit
@@ -2416,7 +2444,7 @@ export interface components {
              * @example non-positive-log-argument
              * @enum {string}
              */
-            code: "empty-input" | "length-mismatch" | "missing-column" | "duplicate-column" | "non-finite-value" | "too-few-observations" | "constant-column" | "constant-response" | "zero-column" | "collinear-columns" | "non-positive-log-argument" | "non-positive-weight" | "invalid-confidence-level" | "unknown-form" | "invalid-argument" | "no-form-fits";
+            code: "empty-input" | "length-mismatch" | "missing-column" | "duplicate-column" | "non-finite-value" | "too-few-observations" | "constant-column" | "constant-response" | "zero-column" | "collinear-columns" | "non-positive-log-argument" | "non-positive-weight" | "invalid-confidence-level" | "unknown-form" | "invalid-argument" | "magnitude-out-of-range" | "no-form-fits";
             /**
              * @description Human-readable explanation.
              * @example Column "ticket_size" needs a natural log for this form, but row 17 (0-based) holds 0, which is not positive.
@@ -2713,7 +2741,7 @@ export interface components {
              * @example constant-response
              * @enum {string}
              */
-            code: "empty-input" | "length-mismatch" | "missing-column" | "duplicate-column" | "non-finite-value" | "too-few-observations" | "constant-column" | "constant-response" | "zero-column" | "collinear-columns" | "non-positive-log-argument" | "non-positive-weight" | "invalid-confidence-level" | "unknown-form" | "invalid-argument" | "no-form-fits";
+            code: "empty-input" | "length-mismatch" | "missing-column" | "duplicate-column" | "non-finite-value" | "too-few-observations" | "constant-column" | "constant-response" | "zero-column" | "collinear-columns" | "non-positive-log-argument" | "non-positive-weight" | "invalid-confidence-level" | "unknown-form" | "invalid-argument" | "magnitude-out-of-range" | "no-form-fits";
             /**
              * @description Human-readable explanation.
              * @example Response "chargeback_rate_amex" does not vary, so R^2 and the F-test are not defined.

@@ -21,13 +21,23 @@ export function ResultTables({ payload }: { payload: ResultPayload }) {
           <FitMeasures fit={fit} />
           <ResultSection
             title="Estimates"
-            note={`Classical standard errors; ${fit.response} on ${fit.predictors.join(', ')}, form ${fit.form}${fit.weights ? `, weighted by ${fit.weights}` : ''}.`}
+            note={
+              `Classical standard errors; ${fit.response} on ${fit.predictors.join(', ')}, form ${fit.form}${fit.weights ? `, weighted by ${fit.weights}` : ''}.` +
+              (fit.numerics.accuracy ? ' Error bound: the most each estimate / standard error can differ, relatively, from the exact least-squares value for the numbers sent.' : '')
+            }
           >
-            <CoefficientTable rows={fit.coefficients} confidenceLevel={fit.confidenceLevel} label="Coefficients" />
+            <CoefficientTable
+              rows={fit.coefficients}
+              confidenceLevel={fit.confidenceLevel}
+              label="Coefficients"
+              {...(fit.numerics.accuracy
+                ? { accuracy: { estimates: fit.numerics.accuracy.coefficients, standardErrors: fit.numerics.accuracy.standardErrors } }
+                : {})}
+            />
           </ResultSection>
           {inference && inference.covariance.type !== 'classical' ? (
             <ResultSection title={`Inference with the ${inference.covariance.type} covariance`}>
-              <InferenceSection inference={inference} />
+              <InferenceSection inference={inference} estimateAccuracy={fit.numerics.accuracy?.coefficients} />
             </ResultSection>
           ) : null}
           <ResultSection title="Analysis of variance">
@@ -38,7 +48,7 @@ export function ResultTables({ payload }: { payload: ResultPayload }) {
           </ResultSection>
           {inference && inference.covariance.type === 'classical' && inference.waldTest ? (
             <ResultSection title="Joint test">
-              <InferenceSection inference={inference} />
+              <InferenceSection inference={inference} estimateAccuracy={fit.numerics.accuracy?.coefficients} />
             </ResultSection>
           ) : null}
           {diagnostics ? (

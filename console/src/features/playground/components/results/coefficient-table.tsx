@@ -9,10 +9,18 @@ type CoefficientTableProps = {
   rows: CoefficientRow[];
   confidenceLevel: number;
   label: string;
+  /** Bounds on the relative error of each estimate and standard error, as the API states them. */
+  accuracy?: { estimates?: (number | null)[]; standardErrors?: (number | null)[] };
 };
 
-export function CoefficientTable({ rows, confidenceLevel, label }: CoefficientTableProps) {
+/** "≤ 2.2e-16", or a dash where no bound is stated. */
+function bound(value: number | null | undefined): string {
+  return value === null || value === undefined ? '–' : `≤ ${value.toExponential(1)}`;
+}
+
+export function CoefficientTable({ rows, confidenceLevel, label, accuracy }: CoefficientTableProps) {
   const level = formatLevel(confidenceLevel);
+  const showAccuracy = accuracy !== undefined && (accuracy.estimates !== undefined || accuracy.standardErrors !== undefined);
   return (
     <Table.Root variant="surface" size="1" className="ll-table ll-stat-table">
       <caption className="ll-visually-hidden">{label}</caption>
@@ -25,10 +33,15 @@ export function CoefficientTable({ rows, confidenceLevel, label }: CoefficientTa
           <NumberHeader title="Two-sided p-value">p-value</NumberHeader>
           <NumberHeader>{level} CI low</NumberHeader>
           <NumberHeader>{level} CI high</NumberHeader>
+          {showAccuracy ? (
+            <NumberHeader title="Upper bound on the relative error of the estimate and of its standard error, for the numbers sent (computed after the fit)">
+              Error bound
+            </NumberHeader>
+          ) : null}
         </Table.Row>
       </Table.Header>
       <Table.Body>
-        {rows.map((row) => (
+        {rows.map((row, index) => (
           <Table.Row key={row.term} data-term={row.term}>
             <TermCell>{row.term}</TermCell>
             <NumberCell>{formatNumber(row.estimate)}</NumberCell>
@@ -37,6 +50,13 @@ export function CoefficientTable({ rows, confidenceLevel, label }: CoefficientTa
             <NumberCell>{formatPValue(row.pValue)}</NumberCell>
             <NumberCell>{formatNumber(row.confidenceInterval.lower)}</NumberCell>
             <NumberCell>{formatNumber(row.confidenceInterval.upper)}</NumberCell>
+            {showAccuracy ? (
+              <NumberCell>
+                <span data-accuracy={row.term}>
+                  {accuracy?.estimates ? bound(accuracy.estimates[index]) : '–'} / {accuracy?.standardErrors ? bound(accuracy.standardErrors[index]) : '–'}
+                </span>
+              </NumberCell>
+            ) : null}
           </Table.Row>
         ))}
       </Table.Body>

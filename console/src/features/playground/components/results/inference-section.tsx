@@ -22,7 +22,7 @@ export function describeCovariance(covariance: Covariance): string {
   }
 }
 
-export function InferenceSection({ inference }: { inference: InferenceResult }) {
+export function InferenceSection({ inference, estimateAccuracy }: { inference: InferenceResult; estimateAccuracy?: (number | null)[] | undefined }) {
   const wald = inference.waldTest;
   return (
     <>
@@ -33,6 +33,14 @@ export function InferenceSection({ inference }: { inference: InferenceResult }) 
         rows={inference.coefficients}
         confidenceLevel={inference.confidenceLevel}
         label={`Coefficients under the ${inference.covariance.type} covariance`}
+        {...(estimateAccuracy || inference.standardErrorAccuracy
+          ? {
+              accuracy: {
+                ...(estimateAccuracy ? { estimates: estimateAccuracy } : {}),
+                ...(inference.standardErrorAccuracy ? { standardErrors: inference.standardErrorAccuracy } : {}),
+              },
+            }
+          : {})}
       />
       {wald ? (
         <Text as="p" size="1" className="ll-result-after-table">
