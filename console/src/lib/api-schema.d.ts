@@ -2933,6 +2933,11 @@ export interface components {
              * @enum {string}
              */
             method: "updating-cross-products";
+            /**
+             * @description Windows solved again by the single-fit path (Householder QR with double-double refinement) because their predictors were ill-conditioned (condition number above about 1e3) or their fit nearly exact (1 − R² below 1e-6), where the updating normal equations would lose digits. Every window meets the single fit’s accuracy either way.
+             * @example 0
+             */
+            exactWindowCount: number;
         };
         RollingFitResponseDto: {
             /**

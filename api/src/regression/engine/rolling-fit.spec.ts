@@ -1,4 +1,7 @@
 import { Matrix, inverse } from 'ml-matrix';
+import { readFileSync } from 'fs';
+import { join } from 'path';
+import { fitModel } from './fit-model';
 import { fitRolling } from './rolling-fit';
 import { seededSource } from './diagnostics/seeded-series';
 
@@ -75,4 +78,52 @@ describe('rolling-window fits with updating sums', () => {
       expect.objectContaining({ code: 'constant-column', column: 'benchmark', row: 5, field: 'window' }),
     );
   });
+});
+
+describe('rolling fits on the data users send (offsets, price levels, near-collinear designs)', () => {
+  const load = (name: string) => {
+    const fixture = JSON.parse(readFileSync(join(__dirname, '__fixtures__', 'exact', `${name}.json`), 'utf8')) as {
+      columns: Record<string, number[]>;
+      response: string;
+      predictors: string[];
+      intercept: boolean;
+      observationCount: number;
+      reference: { coefficients: string[]; classicalStandardErrors: string[] };
+    };
+    const columns = Object.fromEntries(Object.entries(fixture.columns).map(([key, values]) => [key, Float64Array.from(values)]));
+    return { fixture, columns };
+  };
+
+  it.each(['epoch-milliseconds', 'offset-1e12', 'price-level', 'polynomial-5', 'longley'])(
+    '%s: a window over the whole series equals the exact rational reference to 1e-10 (source: generate-exact-references.mjs)',
+    (name) => {
+      const { fixture, columns } = load(name);
+      const result = fitRolling({ columns, response: fixture.response, predictors: fixture.predictors, intercept: fixture.intercept, window: fixture.observationCount });
+      result.coefficientPath.forEach((path, j) => {
+        const estimate = Number(fixture.reference.coefficients[j]);
+        const standardError = Number(fixture.reference.classicalStandardErrors[j]);
+        expect(Math.abs(path.estimates[0]! - estimate) / Math.abs(estimate)).toBeLessThanOrEqual(1e-10);
+        expect(Math.abs(path.standardErrors[0]! - standardError) / standardError).toBeLessThanOrEqual(1e-10);
+      });
+    },
+  );
+
+  it.each(['epoch-milliseconds', 'price-level', 'polynomial-5', 'longley'])(
+    '%s: every window of 20 rows equals the single fit of the same rows to 1e-10 (consistency check against the exactly tested single-fit path)',
+    (name) => {
+      const { fixture, columns } = load(name);
+      const window = Math.min(20, fixture.observationCount - 2);
+      const result = fitRolling({ columns, response: fixture.response, predictors: fixture.predictors, intercept: fixture.intercept, window });
+      let worst = 0;
+      for (let start = 0; start < result.windowCount; start++) {
+        const rows = Object.fromEntries(Object.entries(columns).map(([key, values]) => [key, values.slice(start, start + window)]));
+        const single = fitModel({ columns: rows, response: fixture.response, predictors: fixture.predictors, intercept: fixture.intercept });
+        single.coefficients.forEach((row, j) => {
+          worst = Math.max(worst, Math.abs(result.coefficientPath[j]!.estimates[start]! - row.estimate) / Math.abs(row.estimate));
+          worst = Math.max(worst, Math.abs(result.coefficientPath[j]!.standardErrors[start]! - row.standardError) / row.standardError);
+        });
+      }
+      expect(worst).toBeLessThanOrEqual(1e-10);
+    },
+  );
 });

@@ -23,7 +23,8 @@
 import { EngineError } from './errors';
 import { ColumnValues, validateForm } from './fit-input';
 import { FunctionalForm, predictorTransformation, responseTransformation, transformColumn } from './functional-forms';
-import { INTERCEPT_NAME } from './least-squares';
+import { INTERCEPT_NAME, solveLeastSquares } from './least-squares';
+import { totalSumOfSquares } from './anova';
 import { finiteColumn } from './batch-fit';
 import { AnalysisError } from './diagnostics/analysis-error';
 import { WindowMoments } from './rolling-moments';
@@ -57,10 +58,20 @@ export interface RollingFitResult {
   residualStandardError: number[];
   rSquared: number[];
   method: 'updating-cross-products';
+  /** Windows solved again by the single-fit path because they were ill-conditioned or nearly exact. */
+  exactWindowCount: number;
 }
 
-/** A pivot below this fraction of its diagonal entry (about cond >= 1e6) counts as rank loss. */
-const PIVOT_TOLERANCE = 1e-12;
+/**
+ * The updating normal equations are trusted only while the window's predictors are well conditioned and
+ * its fit is not nearly exact: their error is about epsilon cond^2 for the coefficients and
+ * epsilon / (1 - R^2) for the residual sum of squares. A window whose smallest Cholesky pivot ratio is
+ * below PIVOT_RATIO_FOR_EXACT (cond above about 1e3: epsilon cond^2 near 1e-10) or whose 1 - R^2 is below
+ * NEAR_EXACT_FIT is solved again by the single-fit path (Householder QR with double-double refinement),
+ * which also applies the single fit's rank rule; the answer keeps the single fit's accuracy either way.
+ */
+const PIVOT_RATIO_FOR_EXACT = 1e-3;
+const NEAR_EXACT_FIT = 1e-6;
 /** Recompute from scratch when a centred sum of squares is below this fraction of its anchored raw sum. */
 const CANCELLATION_LIMIT = 1e-6;
 
@@ -92,6 +103,8 @@ export function fitRolling(input: RollingFitInput): RollingFitResult {
   const rSquared = new Float64Array(windowCount);
   const windowStart: number[] = new Array<number>(windowCount);
   const solver = new WindowSolver(k, intercept);
+  const exact = new ExactWindowSolver(predictors, response, names, input.response, intercept, window);
+  let exactWindows = 0;
   for (let w = 0; w < windowCount; w++) {
     const start = w * step;
     if (w % recomputeInterval === 0) {
@@ -101,18 +114,20 @@ export function fitRolling(input: RollingFitInput): RollingFitResult {
       for (let i = start - step + window; i < start + window; i++) moments.add(i);
     }
     if (solver.cancels(moments)) moments.recompute(start, start + window);
-    solver.solve(moments, window, start, names, input.response);
+    const fast = solver.solve(moments, window, start, names, input.response);
+    const source = fast ? solver : exact.solve(start);
+    if (!fast) exactWindows++;
     const offset = intercept ? 1 : 0;
     if (intercept) {
-      estimates[0]![w] = solver.intercept;
-      errors[0]![w] = solver.interceptError;
+      estimates[0]![w] = source.intercept;
+      errors[0]![w] = source.interceptError;
     }
     for (let j = 0; j < k; j++) {
-      estimates[j + offset]![w] = solver.slopes[j]!;
-      errors[j + offset]![w] = solver.slopeErrors[j]!;
+      estimates[j + offset]![w] = source.slopes[j]!;
+      errors[j + offset]![w] = source.slopeErrors[j]!;
     }
-    residualStandardError[w] = solver.residualStandardError;
-    rSquared[w] = solver.rSquared;
+    residualStandardError[w] = source.residualStandardError;
+    rSquared[w] = source.rSquared;
     windowStart[w] = start;
   }
   const terms = intercept ? [INTERCEPT_NAME, ...names] : [...names];
@@ -130,6 +145,7 @@ export function fitRolling(input: RollingFitInput): RollingFitResult {
     residualStandardError: Array.from(residualStandardError),
     rSquared: Array.from(rSquared),
     method: 'updating-cross-products',
+    exactWindowCount: exactWindows,
   };
 }
 
@@ -186,13 +202,14 @@ class WindowSolver {
     return false;
   }
 
-  solve(moments: WindowMoments, window: number, start: number, names: string[], responseName: string): void {
+  /** Solves the window from its moments; false when it must be solved by the single-fit path instead. */
+  solve(moments: WindowMoments, window: number, start: number, names: string[], responseName: string): boolean {
     const { k, lower, work, slopes } = this;
     for (let j = 0; j < k; j++) {
       const diagonal = moments.moment(j, j);
       let pivot = diagonal;
       for (let m = 0; m < j; m++) pivot -= lower[j * k + m]! * lower[j * k + m]!;
-      if (!(diagonal > 0) || !(pivot > PIVOT_TOLERANCE * diagonal)) throw this.rankError(j, start, names, !(diagonal > 0));
+      if (!(diagonal > 0) || !(pivot > PIVOT_RATIO_FOR_EXACT * diagonal)) return false;
       const root = Math.sqrt(pivot);
       lower[j * k + j] = root;
       for (let i = j + 1; i < k; i++) {
@@ -214,6 +231,7 @@ class WindowSolver {
     let explained = 0;
     for (let j = 0; j < k; j++) explained += slopes[j]! * work[j]!;
     const residualSumOfSquares = Math.max(0, responseSquares - explained);
+    if (residualSumOfSquares < NEAR_EXACT_FIT * responseSquares) return false;
     const degreesOfFreedom = window - k - (this.hasIntercept ? 1 : 0);
     const variance = residualSumOfSquares / degreesOfFreedom;
     this.residualStandardError = Math.sqrt(variance);
@@ -237,6 +255,7 @@ class WindowSolver {
       this.intercept = intercept;
       this.interceptError = Math.sqrt(Math.max(0, variance * (1 / window + quadratic)));
     }
+    return true;
   }
 
   private choleskySolve(right: Float64Array, into: Float64Array): void {
@@ -253,19 +272,75 @@ class WindowSolver {
     }
   }
 
-  private rankError(j: number, start: number, names: string[], constant: boolean): EngineError {
-    const name = names[j]!;
-    if (constant || j === 0) {
-      return new EngineError(
-        'constant-column',
-        `Predictor "${name}" does not vary in the window starting at row ${start} (0-based), so its slope is not defined there.`,
-        { column: name, row: start, field: 'window' },
-      );
+}
+
+/**
+ * One window through the single-fit path: the working design, Householder QR with the engine's rank rule,
+ * double-double refinement, the perfect-fit rule (least-squares.ts). Errors name the window's first row.
+ */
+class ExactWindowSolver {
+  readonly slopes: Float64Array;
+  readonly slopeErrors: Float64Array;
+  intercept = 0;
+  interceptError = 0;
+  residualStandardError = 0;
+  rSquared = 0;
+
+  constructor(
+    private readonly predictors: Float64Array[],
+    private readonly response: Float64Array,
+    private readonly names: string[],
+    private readonly responseName: string,
+    private readonly hasIntercept: boolean,
+    private readonly window: number,
+  ) {
+    this.slopes = new Float64Array(predictors.length);
+    this.slopeErrors = new Float64Array(predictors.length);
+  }
+
+  solve(start: number): this {
+    const { window, hasIntercept, names } = this;
+    const end = start + window;
+    const y = this.response.subarray(start, end);
+    const columns = this.predictors.map((column) => column.subarray(start, end));
+    const design = hasIntercept
+      ? { names: [INTERCEPT_NAME, ...names], columns: [new Float64Array(window).fill(1), ...columns], n: window, hasIntercept: true }
+      : { names: [...names], columns, n: window, hasIntercept: false };
+    let solution;
+    try {
+      solution = solveLeastSquares(design, y);
+    } catch (error) {
+      if (error instanceof EngineError) {
+        throw new EngineError(error.code, `${error.message} (in the window starting at row ${start}, 0-based)`, {
+          ...(error.column !== undefined ? { column: error.column } : {}),
+          ...(error.columns !== undefined ? { columns: error.columns } : {}),
+          row: start,
+          field: 'window',
+        });
+      }
+      throw error;
     }
-    return new EngineError(
-      'collinear-columns',
-      `Predictor "${name}" is collinear with the earlier predictors in the window starting at row ${start} (0-based).`,
-      { column: name, columns: names.slice(0, j + 1), row: start, field: 'window' },
-    );
+    const total = totalSumOfSquares(y, null, hasIntercept);
+    if (!(total > 0)) {
+      throw new EngineError('constant-response', `"${this.responseName}" does not vary in the window starting at row ${start} (0-based).`, {
+        column: this.responseName,
+        row: start,
+        field: 'window',
+      });
+    }
+    const p = design.columns.length;
+    const variance = solution.residualSumOfSquares / (window - p);
+    const offset = hasIntercept ? 1 : 0;
+    if (hasIntercept) {
+      this.intercept = solution.coefficients[0]!;
+      this.interceptError = Math.sqrt(variance * solution.unscaledCovariance[0]![0]!);
+    }
+    for (let j = 0; j < this.slopes.length; j++) {
+      this.slopes[j] = solution.coefficients[j + offset]!;
+      this.slopeErrors[j] = Math.sqrt(variance * solution.unscaledCovariance[j + offset]![j + offset]!);
+    }
+    this.residualStandardError = Math.sqrt(variance);
+    this.rSquared = 1 - solution.residualSumOfSquares / total;
+    return this;
   }
 }
