@@ -15,6 +15,8 @@ export function scoreFactors(model: FittedModel): Float64Array {
   const { solution, weights } = model;
   const n = solution.residuals.length;
   const factors = new Float64Array(n);
+  // A perfect fit (perfect-fit.ts) has residuals that are rounding noise: its scores are zero.
+  if (solution.perfectFit) return factors;
   for (let i = 0; i < n; i++) factors[i] = (weights ? weights[i]! : 1) * solution.residuals[i]!;
   return factors;
 }
