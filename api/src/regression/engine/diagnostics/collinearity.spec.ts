@@ -43,3 +43,21 @@ describe('Variance inflation factors (Marquardt 1970) and scaled condition numbe
     expect(result.interceptIncluded).toBe(true);
   });
 });
+
+describe('condition number on offset data', () => {
+  it('epoch-millisecond timestamps: the condition number of [1, x] matches the closed form sqrt((1 + c) / (1 - c)) to 1e-10, with 1 - c from centred sums (closed form for two unit-length columns)', () => {
+    const n = 48;
+    const x = Float64Array.from({ length: n }, (_, i) => 1.7e12 + 100 * i);
+    const y = Float64Array.from({ length: n }, (_, i) => 25 + 0.01 * i + Math.sin(i));
+    const model = fittedModel({ x }, y);
+    const measured = collinearityMeasures(model).conditionNumber;
+    // Exact sums of this grid in decimal: sum x = n 1.7e12 + 100 n (n-1)/2, centred Sxx = 100^2 n (n^2 - 1) / 12.
+    const sumX = n * 1.7e12 + (100 * n * (n - 1)) / 2;
+    const centred = (100 * 100 * n * (n * n - 1)) / 12;
+    const rawSquares = centred + (sumX * sumX) / n;
+    const cosine = sumX / Math.sqrt(n * rawSquares);
+    const oneMinusCosine = centred / rawSquares / (1 + cosine);
+    const expected = Math.sqrt((1 + cosine) / oneMinusCosine);
+    expect(Math.abs(measured - expected) / expected).toBeLessThanOrEqual(1e-10);
+  });
+});

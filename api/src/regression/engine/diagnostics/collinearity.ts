@@ -13,7 +13,8 @@
  * Condition indices sigma_max / sigma_k are returned in decreasing order of sigma_k.
  */
 
-import { SingularValueDecomposition, Matrix } from 'ml-matrix';
+import { EigenvalueDecomposition, SingularValueDecomposition, Matrix } from 'ml-matrix';
+import { DoubleDoubleAccumulator } from '../double-double';
 import { EngineError } from '../errors';
 import { householderFactorise, upperEntry } from '../householder-qr';
 import { fitAuxiliary } from './auxiliary-regression';
@@ -73,7 +74,7 @@ export function scaledSingularValues(columns: Float64Array[], n: number): number
 }
 
 export function collinearityMeasures(model: FittedModel): CollinearityResult {
-  const singular = scaledSingularValues(whitenedColumns(model), model.design.n);
+  const singular = scaledSingularValuesOfModel(model);
   const largest = singular[0]!;
   const smallest = singular[singular.length - 1]!;
   return {
@@ -83,4 +84,52 @@ export function collinearityMeasures(model: FittedModel): CollinearityResult {
     interceptIncluded: model.design.hasIntercept,
     columnsScaledToUnitLength: true,
   };
+}
+
+/**
+ * Singular values of the unit-length-scaled design (whitened), without factorising the raw columns: on
+ * offset data (epoch timestamps) the scaled design is nearly singular by definition, and a QR of its raw
+ * columns would lose the small singular values. Instead, with D = diag(1 / ||x_j||):
+ *   the large ones come from G = D X'WX D, formed with double-double sums (eigenvalues accurate to
+ *   eps lambda_max), and the small ones from G^-1 = D^-1 (X'WX)^-1 D^-1, whose (X'WX)^-1 the solver
+ *   computed in its working coordinates to (nearly) full relative accuracy (eigenvalues accurate to
+ *   eps / lambda_min). Each sigma_k is taken from whichever of the two determines it better.
+ */
+function scaledSingularValuesOfModel(model: FittedModel): number[] {
+  const columns = whitenedColumns(model);
+  const p = columns.length;
+  const n = model.design.n;
+  const norms = columns.map((column) => {
+    let largest = 0;
+    for (let i = 0; i < n; i++) largest = Math.max(largest, Math.abs(column[i]!));
+    if (!(largest > 0)) return 0;
+    let sum = 0;
+    for (let i = 0; i < n; i++) sum += (column[i]! / largest) ** 2;
+    return largest * Math.sqrt(sum);
+  });
+  if (norms.some((norm) => !(norm > 0 && Number.isFinite(norm)))) return scaledSingularValues(columns, n);
+  const gram = Matrix.zeros(p, p);
+  for (let j = 0; j < p; j++) {
+    for (let k = j; k < p; k++) {
+      const sum = new DoubleDoubleAccumulator();
+      const left = columns[j]!;
+      const right = columns[k]!;
+      const a = 1 / norms[j]!;
+      const b = 1 / norms[k]!;
+      for (let i = 0; i < n; i++) sum.addProduct(left[i]! * a, right[i]! * b);
+      gram.set(j, k, sum.value());
+      gram.set(k, j, sum.value());
+    }
+  }
+  const inverse = Matrix.zeros(p, p);
+  const covariance = model.solution.unscaledCovariance;
+  for (let j = 0; j < p; j++) for (let k = 0; k < p; k++) inverse.set(j, k, covariance[j]![k]! * norms[j]! * norms[k]!);
+  const large = new EigenvalueDecomposition(gram, { assumeSymmetric: true }).realEigenvalues.map((value) => Math.max(value, 0));
+  const small = new EigenvalueDecomposition(inverse, { assumeSymmetric: true }).realEigenvalues;
+  large.sort((x, y) => y - x);
+  small.sort((x, y) => x - y);
+  const lambdaMax = large[0]!;
+  const lambdaMin = 1 / small[small.length - 1]!;
+  const middle = Math.sqrt(lambdaMax * lambdaMin);
+  return large.map((value, k) => Math.sqrt(value >= middle ? value : 1 / small[k]!));
 }
