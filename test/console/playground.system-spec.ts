@@ -78,6 +78,8 @@ describe('playground, as a developer', () => {
     await page.getByRole('table', { name: 'Assumption checks' }).waitFor();
     await expect(page.locator('tr[data-check="durbinWatson"] .rt-Badge').textContent()).resolves.toMatch(/^(Pass|Flag)$/);
     await page.getByRole('table', { name: /Coefficients under the hc3 covariance/ }).waitFor();
+    // The answer states its own accuracy beside the numbers: "≤ 2.2e-16 / ≤ 4.4e-16" (estimate / standard error).
+    await expect(table.locator('[data-accuracy="avg_ticket_eur"]').textContent()).resolves.toMatch(/^≤ \d\.\de-1[0-9] \/ ≤ \d\.\de-1[0-9]$/);
     await page.getByText('These are estimates that hold only if').first().waitFor();
     await saveScreenshot(page, 'playground-fit-tables');
   });
