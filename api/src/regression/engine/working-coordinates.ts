@@ -105,6 +105,29 @@ function multiplyInto(
   }
 }
 
+/** (aHi + aLo) . (bHi + bLo) accumulated in double-double (exact products, lo x lo dropped), rounded. */
+function dotDoubleDouble(aHi: Float64Array, aLo: Float64Array, bHi: Float64Array, bLo: Float64Array): number {
+  let sHi = 0;
+  let sLo = 0;
+  for (let j = 0; j < aHi.length; j++) {
+    const a = aHi[j]!;
+    const b = bHi[j]!;
+    const product = a * b;
+    let t = SPLITTER * a;
+    const aH = t - (t - a);
+    const aL = a - aH;
+    t = SPLITTER * b;
+    const bH = t - (t - b);
+    const bL = b - bH;
+    const productError = aH * bH - product + aH * bL + aL * bH + aL * bL + a * bLo[j]! + aLo[j]! * b;
+    const total = sHi + product;
+    const back = total - sHi;
+    sLo += sHi - (total - back) + (product - back) + productError;
+    sHi = total;
+  }
+  return sHi + sLo;
+}
+
 /** vb = M v in double-double (M from working-design.ts: diagonal 1/c_j, intercept row -m_j/c_j). */
 function mapInto(design: WorkingDesign, vHi: Float64Array, vLo: Float64Array, outHi: Float64Array, outLo: Float64Array): void {
   const { p, interceptIndex, inverseScale, shift } = design;
@@ -164,25 +187,7 @@ export function rowVectors(solution: LeastSquaresSolution, weights: Float64Array
     workingRowInto(design, i, zHi, zLo);
     if (!exact) zLo.fill(0);
     multiplyInto(p, covariance, exact ? covarianceLow : null, zHi, zLo, vHi, vLo);
-    let hHi = 0;
-    let hLo = 0;
-    for (let j = 0; j < p; j++) {
-      const a = zHi[j]!;
-      const b = vHi[j]!;
-      const product = a * b;
-      let t = SPLITTER * a;
-      const aH = t - (t - a);
-      const aL = a - aH;
-      t = SPLITTER * b;
-      const bH = t - (t - b);
-      const bL = b - bH;
-      const productError = aH * bH - product + aH * bL + aL * bH + aL * bL + a * vLo[j]! + zLo[j]! * b;
-      const total = hHi + product;
-      const back = total - hHi;
-      hLo += hHi - (total - back) + (product - back) + productError;
-      hHi = total;
-    }
-    leverage[i] = (hHi + hLo) * (weights ? weights[i]! : 1);
+    leverage[i] = dotDoubleDouble(zHi, zLo, vHi, vLo) * (weights ? weights[i]! : 1);
     working.push(Float64Array.from(vHi, (value, j) => value + vLo[j]!));
     if (exact) {
       mapInto(design, vHi, vLo, bHi, bLo);
@@ -350,23 +355,5 @@ export function evaluateAtPoint(model: WorkingPredictionModel, point: ArrayLike<
   const vHi = new Float64Array(p);
   const vLo = new Float64Array(p);
   multiplyInto(p, covariance, covarianceLow, zHi, zLo, vHi, vLo);
-  let sHi = 0;
-  let sLo = 0;
-  for (let j = 0; j < p; j++) {
-    const a = zHi[j]!;
-    const b = vHi[j]!;
-    const product = a * b;
-    let t = SPLITTER * a;
-    const aH = t - (t - a);
-    const aL = a - aH;
-    t = SPLITTER * b;
-    const bH = t - (t - b);
-    const bL = b - bH;
-    const productError = aH * bH - product + aH * bL + aL * bH + aL * bL + a * vLo[j]! + zLo[j]! * b;
-    const total = sHi + product;
-    const back = total - sHi;
-    sLo += sHi - (total - back) + (product - back) + productError;
-    sHi = total;
-  }
-  return { estimate: eHi + eLo, variance: Math.max(0, sHi + sLo) };
+  return { estimate: eHi + eLo, variance: Math.max(0, dotDoubleDouble(zHi, zLo, vHi, vLo)) };
 }
